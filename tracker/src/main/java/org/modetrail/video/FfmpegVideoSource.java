@@ -1,0 +1,258 @@
+package org.modetrail.video;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.BitSet;
+import java.util.Optional;
+
+/**
+ * A video file read through FFmpeg, frame-exact. The frame index (one packet scan, cached on disk) says where
+ * every frame is; {@link #frame(int)} seeks to the last keyframe at or before the wanted frame and decodes forward
+ * until the picture whose timestamp is the wanted frame's comes out. Pictures are matched by timestamp, never by
+ * counting from the seek point, so a demuxer that lands somewhere else than asked cannot shift the result.
+ *
+ * <p>Frames decoded on the way to the wanted one are kept in the decoded-frame cache (up to half its budget), so
+ * that stepping back a frame or two costs nothing; stepping forward continues the same decoder without a seek.
+ */
+final class FfmpegVideoSource implements VideoSource {
+    /** Seeks that landed after the wanted frame are retried from an earlier keyframe this many times. */
+    private static final int SEEK_ATTEMPTS = 4;
+    /** Frames to keep around a random access: enough to step back through, few enough to leave room for others. */
+    private static final int MAX_KEPT_BEHIND = 48;
+
+    private final Path file;
+    private final VideoOptions options;
+    private final FrameIndex index;
+    private final VideoInfo info;
+    private final DecodedFrameCache cache;
+    private final BitSet unreadable = new BitSet();
+    private FfmpegDecoder decoder;
+    /** Presentation index of the last picture the decoder gave out, or -1 when unknown (after a seek). */
+    private int decoderPosition = -1;
+    /** Pictures before this index, after the last seek, may miss their references and are never used. */
+    private int firstTrusted;
+
+    private FfmpegVideoSource(Path file, VideoOptions options, FrameIndex index, VideoInfo info,
+                              FfmpegDecoder decoder) {
+        this.file = file;
+        this.options = options;
+        this.index = index;
+        this.info = info;
+        this.decoder = decoder;
+        this.cache = new DecodedFrameCache(options.cacheBudgetBytes());
+    }
+
+    static FfmpegVideoSource open(Path file, VideoOptions options) throws VideoException {
+        if (!Files.isReadable(file)) {
+            throw new VideoException(file, "the file cannot be read; check its permissions");
+        }
+        FrameIndexCache indexCache = new FrameIndexCache(options.indexCacheDir());
+        Optional<FrameIndexCache.Entry> cached = indexCache.load(file);
+        FrameIndexCache.Entry entry;
+        if (cached.isPresent()) {
+            entry = cached.get();
+        } else {
+            entry = FrameIndexer.scan(file).toCacheEntry();
+            indexCache.store(file, entry);
+        }
+        FfmpegDecoder decoder = FfmpegDecoder.open(file, options.decoderThreads());
+        VideoInfo info = VideoInfo.of(entry.width(), entry.height(), entry.index(), entry.codec(), entry.container());
+        return new FfmpegVideoSource(file, options, entry.index(), info, decoder);
+    }
+
+    @Override
+    public Path path() {
+        return file;
+    }
+
+    @Override
+    public VideoInfo info() {
+        return info;
+    }
+
+    @Override
+    public FrameIndex index() {
+        return index;
+    }
+
+    @Override
+    public synchronized int[] unreadableFrames() {
+        return unreadable.stream().toArray();
+    }
+
+    @Override
+    public synchronized Frame frame(int n) throws VideoException {
+        checkRange(n);
+        Frame cached = cache.get(n);
+        if (cached != null) {
+            return cached;
+        }
+        if (unreadable.get(n)) {
+            throw unreadable(n, "it could not be decoded before");
+        }
+        int keep = Math.min(MAX_KEPT_BEHIND, cache.capacityFor(frameBytes()) / 2);
+        Frame[] found = new Frame[1];
+        decodeRange(n, n + 1, f -> {
+            if (f.index() >= n - keep) {
+                Frame own = f.copy();
+                cache.put(own);
+                if (f.index() == n) {
+                    found[0] = own;
+                }
+            }
+            return true;
+        }, n - keep);
+        if (found[0] == null) {
+            unreadable.set(n);
+            throw unreadable(n, "the decoder produced no picture for it");
+        }
+        return found[0];
+    }
+
+    @Override
+    public synchronized void read(int from, int to, FrameSink sink) throws VideoException {
+        if (from < 0 || to > index.frameCount() || from > to) {
+            throw new VideoException(file, "frames " + from + " to " + to + " are outside 0.." + index.frameCount()
+                    + " of this video");
+        }
+        if (from == to) {
+            return;
+        }
+        decodeRange(from, to, sink, to);
+    }
+
+    /**
+     * Decodes frames [from, to) in order and hands those from {@code convertFrom} on (and every one in
+     * [from, to)) to the sink, reporting frames the decoder skipped as unreadable.
+     */
+    private void decodeRange(int from, int to, FrameSink sink, int convertFrom) throws VideoException {
+        int key = index.keyframeAtOrBefore(from);
+        // Frames before the wanted one are worth converting only when they come on the way anyway.
+        int first = Math.max(Math.min(convertFrom, from), key);
+        if (decoderPosition >= 0 && decoderPosition < from && key <= decoderPosition + 1) {
+            // No keyframe between here and there: going on is never slower than a seek.
+            decodeForward(from, to, sink, first, true);
+            return;
+        }
+        for (int attempt = 0; attempt < SEEK_ATTEMPTS; attempt++) {
+            seekTo(key);
+            if (decodeForward(from, to, sink, first, false) == Outcome.DONE) {
+                return;
+            }
+            if (key == 0) {
+                break;
+            }
+            key = index.keyframeAtOrBefore(key - 1);
+        }
+        reopen();
+        decodeForward(from, to, sink, first, true);
+    }
+
+    private enum Outcome { DONE, LANDED_TOO_LATE }
+
+    /**
+     * Decodes pictures until frame {@code to - 1} has been handed over. With {@code lateStartIsGap} false, a first
+     * picture after the wanted one means the seek overshot and the caller should start earlier; with it true, the
+     * frames skipped over are unreadable.
+     */
+    private Outcome decodeForward(int from, int to, FrameSink sink, int convertFrom, boolean lateStartIsGap)
+            throws VideoException {
+        int[] pixels = null;
+        int expected = from;
+        boolean first = true;
+        while (expected < to) {
+            long pts = decoder.decodeNext();
+            if (pts == FfmpegDecoder.END) {
+                decoderPosition = -1;
+                break;
+            }
+            int i = index.frameWithPts(pts);
+            if (i < 0 || i < firstTrusted || (decoderPosition >= 0 && i <= decoderPosition)) {
+                continue; // a picture the index does not know, or one whose references may be missing
+            }
+            if (first && !lateStartIsGap && i > from) {
+                decoderPosition = i;
+                return Outcome.LANDED_TOO_LATE;
+            }
+            first = false;
+            decoderPosition = i;
+            if (i < convertFrom) {
+                continue;
+            }
+            if (i >= to) {
+                cacheAhead(i);
+                break;
+            }
+            for (int missing = Math.max(expected, from); missing < i; missing++) {
+                unreadable.set(missing);
+                sink.unreadable(missing, "the decoder produced no picture for it");
+            }
+            if (pixels == null) {
+                pixels = new int[info.width() * info.height()];
+            }
+            decoder.convertTo(pixels);
+            boolean goOn = sink.accept(new Frame(i, index.timeSeconds(i), info.width(), info.height(), pixels));
+            expected = Math.max(expected, i + 1);
+            if (!goOn) {
+                return Outcome.DONE;
+            }
+        }
+        for (int missing = expected; missing < to; missing++) {
+            unreadable.set(missing);
+            sink.unreadable(missing, "the file ended before it could be decoded");
+        }
+        return Outcome.DONE;
+    }
+
+    /** A picture decoded past the end of a request is the likeliest next request: keep it rather than lose it. */
+    private void cacheAhead(int i) {
+        int[] pixels = new int[info.width() * info.height()];
+        decoder.convertTo(pixels);
+        cache.put(new Frame(i, index.timeSeconds(i), info.width(), info.height(), pixels));
+    }
+
+    private void seekTo(int keyframe) throws VideoException {
+        decoder.seek(index.pts(keyframe));
+        decoderPosition = -1;
+        firstTrusted = keyframe;
+    }
+
+    /** Starts again from the top of the file: the one way to the first frames that never fails. */
+    private void reopen() throws VideoException {
+        decoder.close();
+        decoder = FfmpegDecoder.open(file, options.decoderThreads());
+        decoderPosition = -1;
+        firstTrusted = 0;
+    }
+
+    private long frameBytes() {
+        return (long) info.width() * info.height() * Integer.BYTES;
+    }
+
+    private void checkRange(int n) throws VideoException {
+        if (n < 0 || n >= index.frameCount()) {
+            throw new VideoException(file, n, "no such frame: this video has frames 0 to " + (index.frameCount() - 1));
+        }
+    }
+
+    private FrameUnreadableException unreadable(int n, String why) {
+        return new FrameUnreadableException(file, n, "frame is unreadable: " + why
+                + "; the file is damaged there, the other frames can still be used");
+    }
+
+    @Override
+    public synchronized void close() {
+        if (decoder != null) {
+            decoder.close();
+            decoder = null;
+        }
+        cache.clear();
+    }
+
+    @Override
+    public String toString() {
+        return "FfmpegVideoSource[" + file + ", " + info.frameCount() + " frames, unreadable "
+                + Arrays.toString(unreadableFrames()) + "]";
+    }
+}
