@@ -34,6 +34,13 @@ final class FfmpegDecoder implements AutoCloseable {
     private static final int AVERROR_EAGAIN = -11;
     /** End of stream marker returned by {@link #decodeNext()}. */
     static final long END = Long.MIN_VALUE;
+    /** Returned by {@link #decodeNext()} for a picture that carries no timestamp at all (distinct from END). */
+    static final long NO_TIMESTAMP = Long.MIN_VALUE + 1;
+    /**
+     * Demuxers that will read almost any file as a picture of text, which a user who opened a file by mistake
+     * should hear about instead.
+     */
+    private static final java.util.Set<String> TEXT_DEMUXERS = java.util.Set.of("tty", "bin", "xbin", "adf", "idf");
     /** FF_THREAD_FRAME | FF_THREAD_SLICE from avcodec.h, which the Java bindings do not carry as constants. */
     private static final int FRAME_AND_SLICE_THREADS = 1 | 2;
 
@@ -56,6 +63,7 @@ final class FfmpegDecoder implements AutoCloseable {
     private BytePointer rgbBytes;
     private PointerPointer<BytePointer> rgbPlanes;
     private IntPointer rgbStrides;
+    private PacketStamps stamps = PacketStamps.NONE;
     private boolean demuxerDone;
     private boolean flushed;
     private int decodeErrors;
@@ -79,6 +87,10 @@ final class FfmpegDecoder implements AutoCloseable {
         if (r < 0) {
             throw new VideoException(file, "FFmpeg cannot read this as a video (" + errorText(r)
                     + "); check that it is a complete video file");
+        }
+        if (TEXT_DEMUXERS.contains(format.iformat().name().getString())) {
+            avformat_close_input(format);
+            throw new VideoException(file, "this is a text file, not a video; open a video file instead");
         }
         r = avformat_find_stream_info(format, (PointerPointer<?>) null);
         if (r < 0) {
@@ -155,6 +167,11 @@ final class FfmpegDecoder implements AutoCloseable {
         return stream.time_base().den();
     }
 
+    /** From now on, packets get the timestamps the index scan saw for them (see {@link PacketStamps}). */
+    void stampPackets(PacketStamps packetStamps) {
+        this.stamps = packetStamps;
+    }
+
     /** Packets the decoder refused as damaged so far. */
     int decodeErrors() {
         return decodeErrors;
@@ -214,6 +231,7 @@ final class FfmpegDecoder implements AutoCloseable {
             }
             try {
                 if (packet.stream_index() == streamIndex) {
+                    restamp(packet);
                     int s = avcodec_send_packet(codec, packet);
                     if (s < 0 && s != AVERROR_EAGAIN) {
                         decodeErrors++;
@@ -226,6 +244,21 @@ final class FfmpegDecoder implements AutoCloseable {
         }
     }
 
+    private void restamp(AVPacket p) {
+        if (stamps.size() == 0) {
+            return;
+        }
+        int i = stamps.find(p.pos());
+        if (i < 0) {
+            return;
+        }
+        if (stamps.fromDts()[i]) {
+            p.dts(stamps.stamps()[i]);
+        } else {
+            p.pts(stamps.stamps()[i]);
+        }
+    }
+
     private static long timestampOf(AVFrame f) {
         long t = f.best_effort_timestamp();
         if (t == AV_NOPTS_VALUE) {
@@ -234,7 +267,7 @@ final class FfmpegDecoder implements AutoCloseable {
         if (t == AV_NOPTS_VALUE) {
             t = f.pkt_dts();
         }
-        return t;
+        return t == AV_NOPTS_VALUE ? NO_TIMESTAMP : t;
     }
 
     /** Whether the decoder flagged the current picture as damaged (concealed errors). */

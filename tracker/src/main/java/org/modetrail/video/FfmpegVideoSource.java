@@ -24,6 +24,7 @@ final class FfmpegVideoSource implements VideoSource {
     private final Path file;
     private final VideoOptions options;
     private final FrameIndex index;
+    private final PacketStamps stamps;
     private final VideoInfo info;
     private final DecodedFrameCache cache;
     private final BitSet unreadable = new BitSet();
@@ -33,11 +34,13 @@ final class FfmpegVideoSource implements VideoSource {
     /** Pictures before this index, after the last seek, may miss their references and are never used. */
     private int firstTrusted;
 
-    private FfmpegVideoSource(Path file, VideoOptions options, FrameIndex index, VideoInfo info,
+    private FfmpegVideoSource(Path file, VideoOptions options, IndexedVideo indexed, VideoInfo info,
                               FfmpegDecoder decoder) {
         this.file = file;
         this.options = options;
-        this.index = index;
+        this.index = indexed.index();
+        this.stamps = indexed.stamps();
+        decoder.stampPackets(stamps);
         this.info = info;
         this.decoder = decoder;
         this.cache = new DecodedFrameCache(options.cacheBudgetBytes());
@@ -48,17 +51,22 @@ final class FfmpegVideoSource implements VideoSource {
             throw new VideoException(file, "the file cannot be read; check its permissions");
         }
         FrameIndexCache indexCache = new FrameIndexCache(options.indexCacheDir());
-        Optional<FrameIndexCache.Entry> cached = indexCache.load(file);
-        FrameIndexCache.Entry entry;
+        Optional<IndexedVideo> cached = indexCache.load(file);
+        IndexedVideo entry;
         if (cached.isPresent()) {
             entry = cached.get();
         } else {
-            entry = FrameIndexer.scan(file).toCacheEntry();
+            entry = FrameIndexer.scan(file);
             indexCache.store(file, entry);
         }
         FfmpegDecoder decoder = FfmpegDecoder.open(file, options.decoderThreads());
+        if (cached.isPresent() && (entry.width() != decoder.width() || entry.height() != decoder.height())) {
+            // A cache entry that disagrees with the file itself is not believed.
+            entry = FrameIndexer.scan(file);
+            indexCache.store(file, entry);
+        }
         VideoInfo info = VideoInfo.of(entry.width(), entry.height(), entry.index(), entry.codec(), entry.container());
-        return new FfmpegVideoSource(file, options, entry.index(), info, decoder);
+        return new FfmpegVideoSource(file, options, entry, info, decoder);
     }
 
     @Override
@@ -93,16 +101,16 @@ final class FfmpegVideoSource implements VideoSource {
         }
         int keep = Math.min(MAX_KEPT_BEHIND, cache.capacityFor(frameBytes()) / 2);
         Frame[] found = new Frame[1];
+        // Each frame comes in a buffer of its own, so the cache takes it as it is: no second 8 MB copy per frame.
         decodeRange(n, n + 1, f -> {
             if (f.index() >= n - keep) {
-                Frame own = f.copy();
-                cache.put(own);
+                cache.put(f);
                 if (f.index() == n) {
-                    found[0] = own;
+                    found[0] = f;
                 }
             }
             return true;
-        }, n - keep);
+        }, n - keep, true);
         if (found[0] == null) {
             unreadable.set(n);
             throw unreadable(n, "the decoder produced no picture for it");
@@ -119,25 +127,27 @@ final class FfmpegVideoSource implements VideoSource {
         if (from == to) {
             return;
         }
-        decodeRange(from, to, sink, to);
+        decodeRange(from, to, sink, to, false);
     }
 
     /**
      * Decodes frames [from, to) in order and hands those from {@code convertFrom} on (and every one in
-     * [from, to)) to the sink, reporting frames the decoder skipped as unreadable.
+     * [from, to)) to the sink, reporting frames the decoder skipped as unreadable. With {@code ownBuffers} every
+     * frame gets a new pixel array that the sink may keep; without, one array is reused from frame to frame.
      */
-    private void decodeRange(int from, int to, FrameSink sink, int convertFrom) throws VideoException {
+    private void decodeRange(int from, int to, FrameSink sink, int convertFrom, boolean ownBuffers)
+            throws VideoException {
         int key = index.keyframeAtOrBefore(from);
         // Frames before the wanted one are worth converting only when they come on the way anyway.
         int first = Math.max(Math.min(convertFrom, from), key);
         if (decoderPosition >= 0 && decoderPosition < from && key <= decoderPosition + 1) {
             // No keyframe between here and there: going on is never slower than a seek.
-            decodeForward(from, to, sink, first, true);
+            decodeForward(from, to, sink, first, true, ownBuffers);
             return;
         }
         for (int attempt = 0; attempt < SEEK_ATTEMPTS; attempt++) {
             seekTo(key);
-            if (decodeForward(from, to, sink, first, false) == Outcome.DONE) {
+            if (decodeForward(from, to, sink, first, false, ownBuffers) == Outcome.DONE) {
                 return;
             }
             if (key == 0) {
@@ -146,7 +156,7 @@ final class FfmpegVideoSource implements VideoSource {
             key = index.keyframeAtOrBefore(key - 1);
         }
         reopen();
-        decodeForward(from, to, sink, first, true);
+        decodeForward(from, to, sink, first, true, ownBuffers);
     }
 
     private enum Outcome { DONE, LANDED_TOO_LATE }
@@ -156,8 +166,8 @@ final class FfmpegVideoSource implements VideoSource {
      * picture after the wanted one means the seek overshot and the caller should start earlier; with it true, the
      * frames skipped over are unreadable.
      */
-    private Outcome decodeForward(int from, int to, FrameSink sink, int convertFrom, boolean lateStartIsGap)
-            throws VideoException {
+    private Outcome decodeForward(int from, int to, FrameSink sink, int convertFrom, boolean lateStartIsGap,
+                                  boolean ownBuffers) throws VideoException {
         int[] pixels = null;
         int expected = from;
         boolean first = true;
@@ -165,9 +175,18 @@ final class FfmpegVideoSource implements VideoSource {
             long pts = decoder.decodeNext();
             if (pts == FfmpegDecoder.END) {
                 decoderPosition = -1;
+                if (first && !lateStartIsGap) {
+                    // The seek landed past the keyframe (MPEG-TS seeks by DTS without regard to keyframes) and no
+                    // usable picture came before the end: start earlier rather than call the frames unreadable.
+                    return Outcome.LANDED_TOO_LATE;
+                }
                 break;
             }
-            int i = index.frameWithPts(pts);
+            // A picture with no timestamp at all (the last one of some AVI files, as ffprobe shows too) is the one
+            // after the picture before it.
+            int i = pts == FfmpegDecoder.NO_TIMESTAMP
+                    ? (decoderPosition >= 0 && decoderPosition + 1 < index.frameCount() ? decoderPosition + 1 : -1)
+                    : index.frameWithPts(pts);
             if (i < 0 || i < firstTrusted || (decoderPosition >= 0 && i <= decoderPosition)) {
                 continue; // a picture the index does not know, or one whose references may be missing
             }
@@ -188,7 +207,7 @@ final class FfmpegVideoSource implements VideoSource {
                 unreadable.set(missing);
                 sink.unreadable(missing, "the decoder produced no picture for it");
             }
-            if (pixels == null) {
+            if (pixels == null || ownBuffers) {
                 pixels = new int[info.width() * info.height()];
             }
             decoder.convertTo(pixels);
@@ -222,6 +241,7 @@ final class FfmpegVideoSource implements VideoSource {
     private void reopen() throws VideoException {
         decoder.close();
         decoder = FfmpegDecoder.open(file, options.decoderThreads());
+        decoder.stampPackets(stamps);
         decoderPosition = -1;
         firstTrusted = 0;
     }
@@ -232,7 +252,8 @@ final class FfmpegVideoSource implements VideoSource {
 
     private void checkRange(int n) throws VideoException {
         if (n < 0 || n >= index.frameCount()) {
-            throw new VideoException(file, n, "no such frame: this video has frames 0 to " + (index.frameCount() - 1));
+            throw new VideoException(file, n, "no such frame: this video has frames 0 to "
+                    + (index.frameCount() - 1));
         }
     }
 

@@ -165,6 +165,15 @@ public final class FrameIndex {
         return false;
     }
 
+    /** The same frames with every timestamp moved by {@code delta} time-base units. */
+    FrameIndex shifted(long delta) {
+        long[] moved = pts.clone();
+        for (int i = 0; i < moved.length; i++) {
+            moved[i] += delta;
+        }
+        return new FrameIndex(moved, keyframe, timeBaseNum, timeBaseDen);
+    }
+
     long[] ptsArray() {
         return pts.clone();
     }

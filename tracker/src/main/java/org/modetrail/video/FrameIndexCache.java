@@ -1,11 +1,12 @@
 package org.modetrail.video;
 
-import java.io.BufferedInputStream;
+import java.io.ByteArrayInputStream;
 import java.io.BufferedOutputStream;
 import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
+import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
@@ -16,6 +17,8 @@ import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
 import java.util.Optional;
+import java.util.zip.CRC32;
+import java.util.zip.CheckedOutputStream;
 
 /**
  * Frame indexes kept on disk so that reopening a long file costs a file read instead of a packet scan. An entry is
@@ -24,7 +27,7 @@ import java.util.Optional;
  */
 final class FrameIndexCache {
     private static final int MAGIC = 0x4D544958; // "MTIX"
-    private static final int VERSION = 1;
+    private static final int VERSION = 3;
 
     private final Path dir;
 
@@ -32,11 +35,7 @@ final class FrameIndexCache {
         this.dir = dir;
     }
 
-    /** What the cache stores about one video: its index and the facts needed to describe it without a scan. */
-    record Entry(FrameIndex index, int width, int height, String codec, String container) {
-    }
-
-    Optional<Entry> load(Path video) {
+    Optional<IndexedVideo> load(Path video) {
         if (dir == null) {
             return Optional.empty();
         }
@@ -46,7 +45,18 @@ final class FrameIndexCache {
             if (!Files.isRegularFile(file)) {
                 return Optional.empty();
             }
-            try (DataInputStream in = new DataInputStream(new BufferedInputStream(Files.newInputStream(file)))) {
+            byte[] bytes = Files.readAllBytes(file);
+            if (bytes.length < Long.BYTES) {
+                return Optional.empty();
+            }
+            // The last 8 bytes are a CRC-32 of everything before: a flipped bit anywhere means a new scan.
+            CRC32 crc = new CRC32();
+            crc.update(bytes, 0, bytes.length - Long.BYTES);
+            if (ByteBuffer.wrap(bytes, bytes.length - Long.BYTES, Long.BYTES).getLong() != crc.getValue()) {
+                return Optional.empty();
+            }
+            try (DataInputStream in = new DataInputStream(new ByteArrayInputStream(bytes, 0,
+                    bytes.length - Long.BYTES))) {
                 if (in.readInt() != MAGIC || in.readInt() != VERSION || !in.readUTF().equals(key)) {
                     return Optional.empty();
                 }
@@ -72,7 +82,20 @@ final class FrameIndexCache {
                 for (int i = 0; i < count; i++) {
                     key2[i] = flags[i] != 0;
                 }
-                return Optional.of(new Entry(new FrameIndex(pts, key2, tbNum, tbDen), width, height, codec, container));
+                int stampCount = in.readInt();
+                if (stampCount < 0 || stampCount > count * 2 + 16) {
+                    return Optional.empty();
+                }
+                long[] positions = new long[stampCount];
+                long[] stamps = new long[stampCount];
+                boolean[] fromDts = new boolean[stampCount];
+                for (int i = 0; i < stampCount; i++) {
+                    positions[i] = in.readLong();
+                    stamps[i] = in.readLong();
+                    fromDts[i] = in.readBoolean();
+                }
+                return Optional.of(new IndexedVideo(new FrameIndex(pts, key2, tbNum, tbDen),
+                        new PacketStamps(positions, stamps, fromDts), width, height, codec, container));
             }
         } catch (IOException | RuntimeException e) {
             return Optional.empty();
@@ -80,7 +103,7 @@ final class FrameIndexCache {
     }
 
     /** Stores an entry atomically; a failure to write the cache never stops the user's work. */
-    void store(Path video, Entry entry) {
+    void store(Path video, IndexedVideo entry) {
         if (dir == null) {
             return;
         }
@@ -91,8 +114,10 @@ final class FrameIndexCache {
             Path file = dir.resolve(key + ".idx");
             tmp = Files.createTempFile(dir, key, ".tmp");
             FrameIndex index = entry.index();
+            CRC32 crc = new CRC32();
             try (OutputStream raw = Files.newOutputStream(tmp);
-                 DataOutputStream out = new DataOutputStream(new BufferedOutputStream(raw, 1 << 16))) {
+                 CheckedOutputStream checked = new CheckedOutputStream(new BufferedOutputStream(raw, 1 << 16), crc);
+                 DataOutputStream out = new DataOutputStream(checked)) {
                 out.writeInt(MAGIC);
                 out.writeInt(VERSION);
                 out.writeUTF(key);
@@ -110,6 +135,16 @@ final class FrameIndexCache {
                 for (int i = 0; i < count; i++) {
                     out.writeByte(index.isKeyframe(i) ? 1 : 0);
                 }
+                PacketStamps stamps = entry.stamps();
+                out.writeInt(stamps.size());
+                for (int i = 0; i < stamps.size(); i++) {
+                    out.writeLong(stamps.positions()[i]);
+                    out.writeLong(stamps.stamps()[i]);
+                    out.writeBoolean(stamps.fromDts()[i]);
+                }
+                out.flush();
+                // Written past the checked stream so that the checksum does not cover itself.
+                new DataOutputStream(raw).writeLong(crc.getValue());
             }
             try {
                 Files.move(tmp, file, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);

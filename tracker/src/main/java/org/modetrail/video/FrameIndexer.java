@@ -20,14 +20,7 @@ final class FrameIndexer {
     private FrameIndexer() {
     }
 
-    /** The scan's result: the index and what describing the video needs. */
-    record Scan(FrameIndex index, int width, int height, String codec, String container) {
-        FrameIndexCache.Entry toCacheEntry() {
-            return new FrameIndexCache.Entry(index, width, height, codec, container);
-        }
-    }
-
-    static Scan scan(Path file) throws VideoException {
+    static IndexedVideo scan(Path file) throws VideoException {
         AVFormatContext format = FfmpegDecoder.openFormat(file);
         AVPacket packet = av_packet_alloc();
         try {
@@ -48,14 +41,23 @@ final class FrameIndexer {
 
             long[] ts = new long[4096];
             boolean[] key = new boolean[4096];
+            long[] pos = new long[4096];
+            boolean[] dts = new boolean[4096];
             int n = 0;
             long previous = AV_NOPTS_VALUE;
+            boolean fromDecodeTimestamps = false;
             while (av_read_frame(format, packet) >= 0) {
                 try {
                     if (packet.stream_index() != s || (packet.flags() & AV_PKT_FLAG_DISCARD) != 0) {
                         continue;
                     }
-                    long t = packet.pts() != AV_NOPTS_VALUE ? packet.pts() : packet.dts();
+                    long t = packet.pts();
+                    boolean usedDts = false;
+                    if (t == AV_NOPTS_VALUE) {
+                        t = packet.dts();
+                        usedDts = true;
+                        fromDecodeTimestamps = true;
+                    }
                     if (t == AV_NOPTS_VALUE) {
                         // No timestamp at all: the frame follows the previous one by its stated duration.
                         t = previous == AV_NOPTS_VALUE ? 0 : previous + Math.max(1, packet.duration());
@@ -64,7 +66,11 @@ final class FrameIndexer {
                     if (n == ts.length) {
                         ts = Arrays.copyOf(ts, n * 2);
                         key = Arrays.copyOf(key, n * 2);
+                        pos = Arrays.copyOf(pos, n * 2);
+                        dts = Arrays.copyOf(dts, n * 2);
                     }
+                    pos[n] = packet.pos();
+                    dts[n] = usedDts;
                     ts[n] = t;
                     key[n] = (packet.flags() & AV_PKT_FLAG_KEY) != 0;
                     n++;
@@ -75,11 +81,44 @@ final class FrameIndexer {
             if (n == 0) {
                 throw new VideoException(file, "the video stream holds no frames; the file may be truncated");
             }
-            return new Scan(presentationOrder(ts, key, n, stream.time_base().num(), stream.time_base().den()),
-                    width, height, codec, container);
+            FrameIndex index = presentationOrder(ts, key, n, stream.time_base().num(), stream.time_base().den());
+            if (fromDecodeTimestamps) {
+                index = alignToDecoder(file, index);
+            }
+            return new IndexedVideo(index, PacketStamps.of(pos, ts, dts, n), width, height, codec, container);
         } finally {
             av_packet_free(packet);
             avformat_close_input(format);
+        }
+    }
+
+    /**
+     * Where packets carry only decode timestamps (AVI), the decoder's pictures come out with timestamps shifted by
+     * the B-frame delay (MPEG-4 part 2 with B-frames in AVI: one frame, as ffprobe's best_effort_timestamp shows).
+     * Decoding the first few pictures tells the shift; the index then holds the timestamps the decoder gives, which
+     * is what frame-exact matching and ffprobe both go by. A shift that does not hold for all of them is not applied.
+     */
+    private static FrameIndex alignToDecoder(Path file, FrameIndex index) throws VideoException {
+        final int checked = 6;
+        try (FfmpegDecoder decoder = FfmpegDecoder.open(file, 1)) {
+            long first = decoder.decodeNext();
+            if (first == FfmpegDecoder.END || first == FfmpegDecoder.NO_TIMESTAMP) {
+                return index;
+            }
+            long shift = first - index.pts(0);
+            if (shift == 0) {
+                return index;
+            }
+            for (int k = 1; k < checked; k++) {
+                long t = decoder.decodeNext();
+                if (t == FfmpegDecoder.END) {
+                    break;
+                }
+                if (index.frameWithPts(t - shift) < 0) {
+                    return index;
+                }
+            }
+            return index.shifted(shift);
         }
     }
 

@@ -1,6 +1,5 @@
 package org.modetrail.video;
 
-import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -12,12 +11,10 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 
-import javax.imageio.ImageIO;
-
 /**
  * A folder of numbered PNG or JPEG images read as a video: frame n is the image with the n-th smallest number in
  * its name (so {@code img_9.png} comes before {@code img_10.png}), frame times follow a stated frame rate, and every
- * frame is a keyframe. Images of another size than the first are an error naming the file.
+ * frame is a keyframe. Images are decoded by FFmpeg, like video. Images of another size than the first are an error naming the file.
  */
 final class ImageSequenceSource implements VideoSource {
     private static final Pattern NUMBERED = Pattern.compile("^(.*?)(\\d+)\\.(png|jpe?g)$", Pattern.CASE_INSENSITIVE);
@@ -42,7 +39,7 @@ final class ImageSequenceSource implements VideoSource {
         if (images.isEmpty()) {
             throw new VideoException(folder, "the folder holds no numbered PNG or JPEG images (such as frame_0001.png)");
         }
-        BufferedImage first = readImage(folder, images.get(0), 0);
+        Decoded first = decode(folder, images.get(0), 0);
         // Times in microseconds keep fractional rates such as 29.97 exact to well under a frame.
         int tbDen = 1_000_000;
         long[] pts = new long[images.size()];
@@ -53,7 +50,7 @@ final class ImageSequenceSource implements VideoSource {
         }
         FrameIndex index = new FrameIndex(pts, key, 1, tbDen);
         String ext = extension(images.get(0));
-        VideoInfo info = VideoInfo.of(first.getWidth(), first.getHeight(), index, ext + "-sequence", "folder");
+        VideoInfo info = VideoInfo.of(first.width(), first.height(), index, ext + "-sequence", "folder");
         ImageSequenceSource source = new ImageSequenceSource(folder, images, index, info, options.cacheBudgetBytes());
         source.cache.put(source.toFrame(0, first));
         return source;
@@ -73,7 +70,7 @@ final class ImageSequenceSource implements VideoSource {
                 }
             });
         } catch (IOException e) {
-            throw new VideoException(folder, -1, "the folder cannot be listed: " + e.getMessage(), e);
+            throw new VideoException(folder, "the folder cannot be listed: " + e.getMessage(), e);
         }
         found.sort(Comparator.comparingLong(Numbered::number).thenComparing(n -> n.path().getFileName().toString()));
         List<Path> paths = new ArrayList<>(found.size());
@@ -88,27 +85,37 @@ final class ImageSequenceSource implements VideoSource {
         return name.endsWith(".png") ? "png" : "jpeg";
     }
 
-    private static BufferedImage readImage(Path folder, Path image, int n) throws VideoException {
-        try {
-            BufferedImage img = ImageIO.read(image.toFile());
-            if (img == null) {
-                throw new FrameUnreadableException(folder, n, image.getFileName() + " is not a readable PNG or JPEG");
+    /**
+     * Decodes one image through FFmpeg, the same decoder and colour conversion as for video files, so that a folder
+     * of frames exported by FFmpeg reads back as the same pixels (JPEG leaves chroma upsampling to the decoder, and
+     * Java's ImageIO upsamples differently).
+     */
+    private static Decoded decode(Path folder, Path image, int n) throws VideoException {
+        try (FfmpegDecoder decoder = FfmpegDecoder.open(image, 1)) {
+            if (decoder.decodeNext() == FfmpegDecoder.END) {
+                throw new FrameUnreadableException(folder, n, image.getFileName() + " holds no picture");
             }
-            return img;
-        } catch (IOException e) {
-            throw new FrameUnreadableException(folder, n, image.getFileName() + " cannot be read: " + e.getMessage());
+            int[] rgb = new int[decoder.width() * decoder.height()];
+            decoder.convertTo(rgb);
+            return new Decoded(decoder.width(), decoder.height(), rgb);
+        } catch (FrameUnreadableException e) {
+            throw e;
+        } catch (VideoException e) {
+            throw new FrameUnreadableException(folder, n, image.getFileName() + " is not a readable PNG or JPEG ("
+                    + e.getMessage() + ")");
         }
     }
 
-    private Frame toFrame(int n, BufferedImage img) throws VideoException {
-        if (img.getWidth() != info.width() || img.getHeight() != info.height()) {
-            throw new FrameUnreadableException(folder, n, images.get(n).getFileName() + " is " + img.getWidth() + "x"
-                    + img.getHeight() + " but the sequence is " + info.width() + "x" + info.height()
+    private record Decoded(int width, int height, int[] rgb) {
+    }
+
+    private Frame toFrame(int n, Decoded img) throws VideoException {
+        if (img.width() != info.width() || img.height() != info.height()) {
+            throw new FrameUnreadableException(folder, n, images.get(n).getFileName() + " is " + img.width() + "x"
+                    + img.height() + " but the sequence is " + info.width() + "x" + info.height()
                     + "; all images must have one size");
         }
-        int[] rgb = new int[info.width() * info.height()];
-        img.getRGB(0, 0, info.width(), info.height(), rgb, 0, info.width());
-        return new Frame(n, index.timeSeconds(n), info.width(), info.height(), rgb);
+        return new Frame(n, index.timeSeconds(n), info.width(), info.height(), img.rgb());
     }
 
     @Override
@@ -137,7 +144,7 @@ final class ImageSequenceSource implements VideoSource {
             return cached;
         }
         try {
-            Frame f = toFrame(n, readImage(folder, images.get(n), n));
+            Frame f = toFrame(n, decode(folder, images.get(n), n));
             cache.put(f);
             return f;
         } catch (FrameUnreadableException e) {
@@ -156,7 +163,7 @@ final class ImageSequenceSource implements VideoSource {
             Frame f;
             try {
                 Frame c = cache.get(n);
-                f = c != null ? c : toFrame(n, readImage(folder, images.get(n), n));
+                f = c != null ? c : toFrame(n, decode(folder, images.get(n), n));
             } catch (FrameUnreadableException e) {
                 unreadable.set(n);
                 sink.unreadable(n, e.getMessage());

@@ -10,28 +10,33 @@ import java.util.OptionalInt;
  */
 public class VideoException extends IOException {
     private final Path file;
-    private final int frame;
+    private final OptionalInt frame;
 
+    /** A problem with the file as a whole. */
     public VideoException(Path file, String problem) {
-        this(file, -1, problem, null);
+        this(file, OptionalInt.empty(), problem, null);
     }
 
+    /** A problem with the file as a whole, caused by another exception. */
+    public VideoException(Path file, String problem, Throwable cause) {
+        this(file, OptionalInt.empty(), problem, cause);
+    }
+
+    /** A problem with one frame, which the message names (also when the number asked for was negative). */
     public VideoException(Path file, int frame, String problem) {
-        this(file, frame, problem, null);
+        this(file, OptionalInt.of(frame), problem, null);
     }
 
-    public VideoException(Path file, int frame, String problem, Throwable cause) {
+    private VideoException(Path file, OptionalInt frame, String problem, Throwable cause) {
         super(compose(file, frame, problem), cause);
         this.file = file;
         this.frame = frame;
     }
 
-    private static String compose(Path file, int frame, String problem) {
+    private static String compose(Path file, OptionalInt frame, String problem) {
         StringBuilder sb = new StringBuilder();
         sb.append(file);
-        if (frame >= 0) {
-            sb.append(", frame ").append(frame);
-        }
+        frame.ifPresent(n -> sb.append(", frame ").append(n));
         return sb.append(": ").append(problem).toString();
     }
 
@@ -42,6 +47,6 @@ public class VideoException extends IOException {
 
     /** The 0-based frame involved, if the problem concerns one frame. */
     public OptionalInt frame() {
-        return frame >= 0 ? OptionalInt.of(frame) : OptionalInt.empty();
+        return frame;
     }
 }

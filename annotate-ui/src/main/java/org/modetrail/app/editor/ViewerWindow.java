@@ -157,8 +157,8 @@ final class ViewerWindow extends JFrame {
                 Frame f = s.frame(n);
                 BufferedImage img = new BufferedImage(f.width(), f.height(), BufferedImage.TYPE_INT_RGB);
                 img.setRGB(0, 0, f.width(), f.height(), f.rgb(), 0, f.width());
-                String text = String.format(Locale.ROOT, "frame %d of %d · %.3f s · %dx%d · %s", n,
-                        s.frameCount(), f.timeSeconds(), f.width(), f.height(), s.info().codec());
+                String text = String.format(Locale.ROOT, "frame %d (0–%d) · %.3f s · %dx%d · %s", n,
+                        s.frameCount() - 1, f.timeSeconds(), f.width(), f.height(), s.info().codec());
                 SwingUtilities.invokeLater(() -> {
                     canvas.show(img);
                     status.setText(text);
