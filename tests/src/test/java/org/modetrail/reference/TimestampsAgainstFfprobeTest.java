@@ -128,7 +128,11 @@ class TimestampsAgainstFfprobeTest {
         // a tick (our reading of "variable"; the tick allows rates that do not divide the time base).
         List<Long> intervals = new ArrayList<>();
         for (int n = 1; n < frames.size(); n++) {
-            intervals.add(frames.get(n).ptsOrBestEffort() - frames.get(n - 1).ptsOrBestEffort());
+            long a = frames.get(n - 1).ptsOrBestEffort();
+            long b = frames.get(n).ptsOrBestEffort();
+            if (a != Ffprobe.NA && b != Ffprobe.NA) { // a frame ffprobe gives no time says nothing of intervals
+                intervals.add(b - a);
+            }
         }
         long mode = intervals.stream().collect(java.util.stream.Collectors.groupingBy(x -> x,
                 java.util.stream.Collectors.counting())).entrySet().stream()

@@ -281,6 +281,16 @@ final class FfmpegDecoder implements AutoCloseable {
      * as 0xFFRRGGBB ints), then one bulk copy.
      */
     void convertTo(int[] rgb) {
+        convert(picture, rgb);
+    }
+
+    /** A new reference to the current picture (no pixel copy), which outlives the next decode; null on failure. */
+    AVFrame holdCurrent() {
+        return av_frame_clone(picture);
+    }
+
+    /** Converts a picture held earlier (see {@link #holdCurrent()}) like {@link #convertTo(int[])}. */
+    void convert(AVFrame picture, int[] rgb) {
         if (sws == null || sws.isNull() || picture.format() != lastSourceFormat
                 || picture.width() != lastSourceWidth || picture.height() != lastSourceHeight) {
             int packed = ByteOrder.nativeOrder() == ByteOrder.LITTLE_ENDIAN ? AV_PIX_FMT_BGR0 : AV_PIX_FMT_0RGB;

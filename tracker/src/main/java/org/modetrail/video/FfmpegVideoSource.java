@@ -1,10 +1,14 @@
 package org.modetrail.video;
 
+import static org.bytedeco.ffmpeg.global.avutil.av_frame_free;
+
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.BitSet;
 import java.util.Optional;
+
+import org.bytedeco.ffmpeg.avutil.AVFrame;
 
 /**
  * A video file read through FFmpeg, frame-exact. The frame index (one packet scan, cached on disk) says where
@@ -12,8 +16,9 @@ import java.util.Optional;
  * until the picture whose timestamp is the wanted frame's comes out. Pictures are matched by timestamp, never by
  * counting from the seek point, so a demuxer that lands somewhere else than asked cannot shift the result.
  *
- * <p>Frames decoded on the way to the wanted one are kept in the decoded-frame cache (up to half its budget), so
- * that stepping back a frame or two costs nothing; stepping forward continues the same decoder without a seek.
+ * <p>Pictures decoded on the way to the wanted frame are held as the decoder gave them (reference-counted, not yet
+ * converted: no cost unless used), so that stepping back costs one colour conversion instead of a seek; stepping
+ * forward continues the same decoder without a seek. Converted frames live in the decoded-frame cache.
  */
 final class FfmpegVideoSource implements VideoSource {
     /** Seeks that landed after the wanted frame are retried from an earlier keyframe this many times. */
@@ -27,6 +32,7 @@ final class FfmpegVideoSource implements VideoSource {
     private final PacketStamps stamps;
     private final VideoInfo info;
     private final DecodedFrameCache cache;
+    private final HeldPictures held;
     private final BitSet unreadable = new BitSet();
     private FfmpegDecoder decoder;
     /** Presentation index of the last picture the decoder gave out, or -1 when unknown (after a seek). */
@@ -44,6 +50,7 @@ final class FfmpegVideoSource implements VideoSource {
         this.info = info;
         this.decoder = decoder;
         this.cache = new DecodedFrameCache(options.cacheBudgetBytes());
+        this.held = new HeldPictures(Math.min(MAX_KEPT_BEHIND, cache.capacityFor(frameBytes()) / 2));
     }
 
     static FfmpegVideoSource open(Path file, VideoOptions options) throws VideoException {
@@ -99,18 +106,25 @@ final class FfmpegVideoSource implements VideoSource {
         if (unreadable.get(n)) {
             throw unreadable(n, "it could not be decoded before");
         }
-        int keep = Math.min(MAX_KEPT_BEHIND, cache.capacityFor(frameBytes()) / 2);
-        Frame[] found = new Frame[1];
-        // Each frame comes in a buffer of its own, so the cache takes it as it is: no second 8 MB copy per frame.
-        decodeRange(n, n + 1, f -> {
-            if (f.index() >= n - keep) {
+        AVFrame picture = held.take(n);
+        if (picture != null) {
+            // Passed on the way to an earlier random access: convert it now that it is wanted.
+            try {
+                int[] pixels = new int[info.width() * info.height()];
+                decoder.convert(picture, pixels);
+                Frame f = new Frame(n, index.timeSeconds(n), info.width(), info.height(), pixels);
                 cache.put(f);
-                if (f.index() == n) {
-                    found[0] = f;
-                }
+                return f;
+            } finally {
+                av_frame_free(picture);
             }
+        }
+        Frame[] found = new Frame[1];
+        decodeRange(n, n + 1, f -> {
+            cache.put(f);
+            found[0] = f;
             return true;
-        }, n - keep, true);
+        }, n - MAX_KEPT_BEHIND, true);
         if (found[0] == null) {
             unreadable.set(n);
             throw unreadable(n, "the decoder produced no picture for it");
@@ -132,22 +146,22 @@ final class FfmpegVideoSource implements VideoSource {
 
     /**
      * Decodes frames [from, to) in order and hands those from {@code convertFrom} on (and every one in
-     * [from, to)) to the sink, reporting frames the decoder skipped as unreadable. With {@code ownBuffers} every
-     * frame gets a new pixel array that the sink may keep; without, one array is reused from frame to frame.
+     * [from, to)) to the sink, reporting frames the decoder skipped as unreadable. With {@code holdBehind} (random
+     * access) every frame gets a pixel array of its own that the sink may keep; without, one array is reused.
      */
-    private void decodeRange(int from, int to, FrameSink sink, int convertFrom, boolean ownBuffers)
+    private void decodeRange(int from, int to, FrameSink sink, int convertFrom, boolean holdBehind)
             throws VideoException {
         int key = index.keyframeAtOrBefore(from);
         // Frames before the wanted one are worth converting only when they come on the way anyway.
         int first = Math.max(Math.min(convertFrom, from), key);
         if (decoderPosition >= 0 && decoderPosition < from && key <= decoderPosition + 1) {
             // No keyframe between here and there: going on is never slower than a seek.
-            decodeForward(from, to, sink, first, true, ownBuffers);
+            decodeForward(from, to, sink, first, true, holdBehind);
             return;
         }
         for (int attempt = 0; attempt < SEEK_ATTEMPTS; attempt++) {
             seekTo(key);
-            if (decodeForward(from, to, sink, first, false, ownBuffers) == Outcome.DONE) {
+            if (decodeForward(from, to, sink, first, false, holdBehind) == Outcome.DONE) {
                 return;
             }
             if (key == 0) {
@@ -156,7 +170,7 @@ final class FfmpegVideoSource implements VideoSource {
             key = index.keyframeAtOrBefore(key - 1);
         }
         reopen();
-        decodeForward(from, to, sink, first, true, ownBuffers);
+        decodeForward(from, to, sink, first, true, holdBehind);
     }
 
     private enum Outcome { DONE, LANDED_TOO_LATE }
@@ -164,10 +178,11 @@ final class FfmpegVideoSource implements VideoSource {
     /**
      * Decodes pictures until frame {@code to - 1} has been handed over. With {@code lateStartIsGap} false, a first
      * picture after the wanted one means the seek overshot and the caller should start earlier; with it true, the
-     * frames skipped over are unreadable.
+     * frames skipped over are unreadable. For a random access ({@code holdBehind}), pictures before {@code from}
+     * are held unconverted for a later step back, and each frame handed over has a pixel array of its own.
      */
     private Outcome decodeForward(int from, int to, FrameSink sink, int convertFrom, boolean lateStartIsGap,
-                                  boolean ownBuffers) throws VideoException {
+                                  boolean holdBehind) throws VideoException {
         int[] pixels = null;
         int expected = from;
         boolean first = true;
@@ -199,6 +214,12 @@ final class FfmpegVideoSource implements VideoSource {
             if (i < convertFrom) {
                 continue;
             }
+            if (holdBehind && i < from) {
+                if (!cache.contains(i)) {
+                    held.hold(i, decoder.holdCurrent());
+                }
+                continue;
+            }
             if (i >= to) {
                 cacheAhead(i);
                 break;
@@ -207,7 +228,7 @@ final class FfmpegVideoSource implements VideoSource {
                 unreadable.set(missing);
                 sink.unreadable(missing, "the decoder produced no picture for it");
             }
-            if (pixels == null || ownBuffers) {
+            if (pixels == null || holdBehind) {
                 pixels = new int[info.width() * info.height()];
             }
             decoder.convertTo(pixels);
@@ -268,6 +289,7 @@ final class FfmpegVideoSource implements VideoSource {
             decoder.close();
             decoder = null;
         }
+        held.clear();
         cache.clear();
     }
 
