@@ -24,7 +24,7 @@ final class FfmpegVideoSource implements VideoSource {
     /** Seeks that landed after the wanted frame are retried from an earlier keyframe this many times. */
     private static final int SEEK_ATTEMPTS = 4;
     /** Frames to keep around a random access: enough to step back through, few enough to leave room for others. */
-    private static final int MAX_KEPT_BEHIND = 48;
+    private static final int MAX_KEPT_BEHIND = 8;
 
     private final Path file;
     private final VideoOptions options;
