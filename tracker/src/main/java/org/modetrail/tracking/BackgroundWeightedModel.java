@@ -1,0 +1,142 @@
+package org.modetrail.tracking;
+
+import org.modetrail.model.Box;
+
+/**
+ * The target model with the corrected background-weighted histogram (CBWH) of Ning, Zhang, Zhang and Wu, "Robust
+ * mean-shift tracking with corrected background-weighted histogram", IET Computer Vision 6(1), 2012.
+ *
+ * <p>The background histogram o_u is taken from a ring around the target box (the box doubled in width and height,
+ * minus the box: three times its area). Colours common in the background are played down by
+ * v_u = min(o* / o_u, 1), o* the smallest non-zero o_u; the target model becomes q'_u = C' v_u q_u. The correction
+ * of the paper is to transform only the target model, not the candidate, so the mean-shift weights become
+ * w_i = sqrt(q'_u / p_u(y0)) and really favour what sets the target apart. The background is taken anew when its
+ * Bhattacharyya coefficient with the stored one falls under a threshold (the paper's background update).
+ *
+ * <p>Departure from the paper: the background ring is weighted uniformly (the paper does the same; the kernel
+ * profile applies only inside the target's ellipse), and v_u for colours absent from the background is 1.
+ */
+final class BackgroundWeightedModel {
+    /** Plain target model q_u: what similarity is reported against. */
+    final KernelHistogram target;
+    /** The background-weighted target model q'_u used for the mean-shift weights. */
+    final float[] weighted;
+    /** Background histogram o_u (normalised, uniform weights over the ring). */
+    final float[] background;
+    private final float[] freshBackground;
+    private final boolean enabled;
+
+    BackgroundWeightedModel(int binCount, boolean enabled) {
+        target = new KernelHistogram(binCount);
+        weighted = new float[binCount];
+        background = new float[binCount];
+        freshBackground = new float[binCount];
+        this.enabled = enabled;
+    }
+
+    /** Builds q, o and q' from the box on the current bin image. */
+    void build(BinImage image, Box box) {
+        target.compute(image, box);
+        ring(image, box, background);
+        reweight();
+    }
+
+    /**
+     * Replaces the stored background with the one around {@code box} when they differ (Bhattacharyya coefficient
+     * under {@code threshold}), and then the weighted model; returns whether it did.
+     */
+    boolean refreshBackground(BinImage image, Box box, double threshold) {
+        if (!enabled) {
+            return false;
+        }
+        ring(image, box, freshBackground);
+        double rho = BhattacharyyaCoefficient.of(freshBackground, background);
+        if (rho >= threshold) {
+            return false;
+        }
+        System.arraycopy(freshBackground, 0, background, 0, background.length);
+        reweight();
+        return true;
+    }
+
+    /** Blends the plain target model towards a candidate: q = (1 - a) q + a p, then re-derives q'. */
+    void blend(KernelHistogram candidate, double rate) {
+        float keep = (float) (1 - rate);
+        float take = (float) rate;
+        float[] q = target.values;
+        for (int k = 0; k < target.touchedCount; k++) {
+            q[target.touched[k]] *= keep;
+        }
+        for (int k = 0; k < candidate.touchedCount; k++) {
+            int u = candidate.touched[k];
+            if (q[u] == 0) {
+                target.touched[target.touchedCount++] = u;
+            }
+            q[u] += take * candidate.values[u];
+        }
+        reweight();
+    }
+
+    private void reweight() {
+        float[] q = target.values;
+        if (!enabled) {
+            System.arraycopy(q, 0, weighted, 0, q.length);
+            return;
+        }
+        float oStar = Float.MAX_VALUE;
+        for (float o : background) {
+            if (o > 0 && o < oStar) {
+                oStar = o;
+            }
+        }
+        java.util.Arrays.fill(weighted, 0);
+        double sum = 0;
+        for (int k = 0; k < target.touchedCount; k++) {
+            int u = target.touched[k];
+            float o = background[u];
+            float v = o > 0 ? Math.min(oStar / o, 1f) : 1f;
+            weighted[u] = v * q[u];
+            sum += weighted[u];
+        }
+        if (sum > 0) {
+            float inv = (float) (1 / sum);
+            for (int k = 0; k < target.touchedCount; k++) {
+                weighted[target.touched[k]] *= inv;
+            }
+        }
+    }
+
+    /** Uniform histogram of the ring between {@code box} and the box twice its size, normalised. */
+    static void ring(BinImage image, Box box, float[] out) {
+        java.util.Arrays.fill(out, 0);
+        int ix0 = (int) Math.floor(box.x());
+        int iy0 = (int) Math.floor(box.y());
+        int ix1 = (int) Math.ceil(box.right());
+        int iy1 = (int) Math.ceil(box.bottom());
+        int ox0 = Math.max(image.x0(), (int) Math.floor(box.centreX() - box.width()));
+        int oy0 = Math.max(image.y0(), (int) Math.floor(box.centreY() - box.height()));
+        int ox1 = Math.min(image.x0() + image.width(), (int) Math.ceil(box.centreX() + box.width()));
+        int oy1 = Math.min(image.y0() + image.height(), (int) Math.ceil(box.centreY() + box.height()));
+        int[] bins = image.raw();
+        int stride = image.width();
+        int count = 0;
+        for (int y = oy0; y < oy1; y++) {
+            int row = (y - image.y0()) * stride - image.x0();
+            boolean insideRows = y >= iy0 && y < iy1;
+            for (int x = ox0; x < ox1; x++) {
+                if (insideRows && x >= ix0 && x < ix1) {
+                    x = ix1 - 1; // skip the box itself
+                    continue;
+                }
+                out[bins[row + x]] += 1;
+                count++;
+            }
+        }
+        if (count > 0) {
+            float inv = 1f / count;
+            for (int u = 0; u < out.length; u++) {
+                out[u] *= inv;
+            }
+        }
+    }
+}

@@ -1,0 +1,14 @@
+package org.modetrail.tracking;
+
+/** How the tracker follows changes of the object's size. */
+public enum ScaleMethod {
+    /** The box keeps the size it was started with. */
+    FIXED,
+    /**
+     * Comaniciu, Ramesh and Meer's rule: localise with the window at its size and 10% smaller and larger, keep the
+     * best and smooth (PAMI 2003, section 5). Known to shrink the window on its own.
+     */
+    TEN_PERCENT,
+    /** Width and height from the second moments of the colour-likelihood map ({@link MomentScaleEstimator}). */
+    MOMENTS
+}

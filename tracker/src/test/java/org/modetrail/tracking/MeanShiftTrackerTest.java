@@ -1,0 +1,116 @@
+package org.modetrail.tracking;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.modetrail.model.Box;
+import org.modetrail.video.Frame;
+
+/** The tracker on scenes whose true box is known exactly; figures are the IoU with that box. */
+class MeanShiftTrackerTest {
+    private static final int RED = 0xFFC03020;
+
+    private static double followAndReportWorstIou(Tracker tracker, SyntheticScene scene, Box[] path) {
+        tracker.start(scene.frame(0, path[0]), path[0]);
+        double worst = 1;
+        for (int i = 1; i < path.length; i++) {
+            TrackStep step = tracker.track(scene.frame(i, path[i]));
+            assertEquals(TrackStatus.TRACKED, step.status(), "frame " + i + " similarity " + step.similarity());
+            worst = Math.min(worst, step.box().iou(path[i]));
+        }
+        return worst;
+    }
+
+    @Test
+    void aStationaryObjectStaysPut() {
+        SyntheticScene scene = new SyntheticScene(320, 240, RED, 1);
+        Box[] path = new Box[30];
+        for (int i = 0; i < path.length; i++) {
+            path[i] = new Box(140, 100, 40, 30);
+        }
+        assertTrue(followAndReportWorstIou(new MeanShiftTracker(), scene, path) > 0.85);
+    }
+
+    @Test
+    void smallTranslationIsFollowed() {
+        SyntheticScene scene = new SyntheticScene(320, 240, RED, 2);
+        Box[] path = new Box[60];
+        for (int i = 0; i < path.length; i++) {
+            path[i] = new Box(20 + 3 * i, 60 + i, 40, 30);
+        }
+        assertTrue(followAndReportWorstIou(new MeanShiftTracker(), scene, path) > 0.7);
+    }
+
+    @Test
+    void largeTranslationIsFollowedThroughTheWideSearch() {
+        // 18 px a frame with the direction turning every 10 frames: beyond mean shift's reach from the prediction.
+        SyntheticScene scene = new SyntheticScene(480, 360, RED, 3);
+        Box[] path = new Box[50];
+        double x = 40;
+        double y = 40;
+        for (int i = 0; i < path.length; i++) {
+            path[i] = new Box(x, y, 40, 30);
+            int leg = (i / 10) % 4;
+            x += leg == 0 ? 18 : leg == 2 ? -18 : 4;
+            y += leg == 1 ? 18 : leg == 3 ? -14 : 3;
+        }
+        assertTrue(followAndReportWorstIou(new MeanShiftTracker(), scene, path) > 0.5);
+    }
+
+    @Test
+    void zoomInAndOutIsFollowedBySize() {
+        SyntheticScene scene = new SyntheticScene(320, 240, RED, 4);
+        Box[] path = new Box[80];
+        for (int i = 0; i < path.length; i++) {
+            double s = i < 40 ? 1 + 0.4 * i / 40 : 1.4 - 0.8 * (i - 40) / 40; // 1 -> 1.4 -> 0.6
+            path[i] = Box.centredAt(160, 120, 50 * s, 36 * s);
+        }
+        MeanShiftTracker tracker = new MeanShiftTracker();
+        double worst = followAndReportWorstIou(tracker, scene, path);
+        assertTrue(worst > 0.6, "worst IoU " + worst);
+        assertEquals(30, tracker.box().width(), 5, "final width follows the shrink to 30");
+    }
+
+    @Test
+    void theTrackerCanBeStartedAgainOnAnotherImageSize() {
+        MeanShiftTracker tracker = new MeanShiftTracker();
+        SyntheticScene small = new SyntheticScene(160, 120, RED, 5);
+        Box b = new Box(50, 40, 30, 20);
+        tracker.start(small.frame(0, b), b);
+        tracker.track(small.frame(1, b));
+        SyntheticScene big = new SyntheticScene(640, 480, 0xFF2040C0, 6);
+        Box c = new Box(300, 200, 60, 40);
+        tracker.start(big.frame(0, c), c);
+        TrackStep s = tracker.track(big.frame(1, c.movedTo(c.centreX() + 4, c.centreY())));
+        assertTrue(s.box().iou(c.movedTo(c.centreX() + 4, c.centreY())) > 0.8);
+    }
+
+    @Test
+    void anObjectThatVanishesIsCoastedThenLost() {
+        SyntheticScene scene = new SyntheticScene(320, 240, RED, 7);
+        TrackerConfig config = TrackerConfig.defaults();
+        MeanShiftTracker tracker = new MeanShiftTracker(config);
+        Box b = new Box(100, 100, 40, 30);
+        tracker.start(scene.frame(0, b), b);
+        Box gone = new Box(-500, -500, 1, 1);
+        TrackStep step = null;
+        for (int i = 1; i <= config.maxCoastFrames() + 1; i++) {
+            step = tracker.track(scene.frame(i, gone));
+            if (i <= config.maxCoastFrames()) {
+                assertEquals(TrackStatus.COASTING, step.status(), "frame " + i);
+            }
+        }
+        assertEquals(TrackStatus.LOST, step.status());
+        assertTrue(step.similarity() < config.lostSimilarity());
+        assertThrows(IllegalStateException.class, () -> tracker.track(scene.frame(99, gone)));
+    }
+
+    @Test
+    void aBoxOutsideTheFrameIsRefused() {
+        SyntheticScene scene = new SyntheticScene(100, 100, RED, 8);
+        Frame f = scene.frame(0, new Box(10, 10, 10, 10));
+        assertThrows(IllegalArgumentException.class, () -> new MeanShiftTracker().start(f, new Box(200, 200, 10, 10)));
+    }
+}
