@@ -33,6 +33,19 @@ final class SyntheticScene {
     /** The frame with the object filling the ellipse inscribed in {@code box}. */
     Frame frame(int index, Box box) {
         int[] rgb = floor.clone();
+        paint(rgb, index, box, colour);
+        return new Frame(index, index / 25.0, width, height, rgb);
+    }
+
+    /** The frame with a second object of another colour painted over the first. */
+    Frame frame(int index, Box box, Box other, int otherColour) {
+        int[] rgb = floor.clone();
+        paint(rgb, index, box, colour);
+        paint(rgb, index + 7919, other, otherColour);
+        return new Frame(index, index / 25.0, width, height, rgb);
+    }
+
+    private void paint(int[] rgb, int index, Box box, int colour) {
         Random r = new Random(seed * 31 + index);
         double cx = box.centreX();
         double cy = box.centreY();
@@ -48,7 +61,6 @@ final class SyntheticScene {
                 }
             }
         }
-        return new Frame(index, index / 25.0, width, height, rgb);
     }
 
     private static int shadeOf(int c, int d) {
