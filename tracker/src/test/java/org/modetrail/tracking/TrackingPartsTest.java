@@ -79,7 +79,7 @@ class TrackingPartsTest {
         model.build(image, box);
         int r = RgbBinning.DEFAULT.binOf(red);
         int g = RgbBinning.DEFAULT.binOf(grey);
-        assertEquals(model.target.values[r], model.target.values[g], 0.03, "plain model: about half and half");
+        assertTrue(model.target.values[r] > 0.4 && model.target.values[g] > 0.4, "plain model: about half and half");
         // v_grey = o_blue / o_grey, about 0.05 / 0.95; v_red = 1; so q'_red = 1 / (1 + 0.053) after normalising.
         assertTrue(model.weighted[r] > 0.9, "red, absent from the background, keeps the weight: " + model.weighted[r]);
         assertTrue(model.weighted[g] < 0.1, "grey, which fills the ring, loses it: " + model.weighted[g]);
