@@ -41,15 +41,20 @@ final class BackgroundWeightedModel {
         reweight();
     }
 
+    /** Takes the background ring around {@code box} on the current frame, without adopting it yet. */
+    float[] sampleBackground(BinImage image, Box box) {
+        ring(image, box, freshBackground);
+        return freshBackground;
+    }
+
     /**
-     * Replaces the stored background with the one around {@code box} when they differ (Bhattacharyya coefficient
-     * under {@code threshold}), and then the weighted model; returns whether it did.
+     * Adopts the last sampled background (and re-derives q') when it differs from the stored one, Bhattacharyya
+     * coefficient under {@code threshold}: the background update of Ning et al. Returns whether it did.
      */
-    boolean refreshBackground(BinImage image, Box box, double threshold) {
+    boolean adoptSampledBackground(double threshold) {
         if (!enabled) {
             return false;
         }
-        ring(image, box, freshBackground);
         double rho = BhattacharyyaCoefficient.of(freshBackground, background);
         if (rho >= threshold) {
             return false;

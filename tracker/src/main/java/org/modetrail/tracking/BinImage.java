@@ -21,6 +21,11 @@ final class BinImage {
 
     /** Bins the part of {@code [rx0, rx1) x [ry0, ry1)} that lies inside the frame. */
     void load(Frame frame, int rx0, int ry0, int rx1, int ry1) {
+        load(frame, rx0, ry0, rx1, ry1, null);
+    }
+
+    /** The same, with the pixels' colours compensated for the light first (null for none). */
+    void load(Frame frame, int rx0, int ry0, int rx1, int ry1, IlluminationCompensation light) {
         x0 = Math.max(0, rx0);
         y0 = Math.max(0, ry0);
         int x1 = Math.min(frame.width(), rx1);
@@ -31,8 +36,21 @@ final class BinImage {
         if (bins.length < n) {
             bins = new int[Math.max(n, bins.length * 3 / 2)];
         }
-        if (n > 0) {
+        if (n > 0 && (light == null || light.isIdentity())) {
             binning.binRegion(frame.rgb(), frame.width(), x0, y0, width, height, bins);
+        } else if (n > 0) {
+            int[] rgb = frame.rgb();
+            int[] r = light.red;
+            int[] g = light.green;
+            int[] b = light.blue;
+            int k = 0;
+            for (int y = y0; y < y0 + height; y++) {
+                int row = y * frame.width();
+                for (int x = x0; x < x0 + width; x++) {
+                    int p = rgb[row + x];
+                    bins[k++] = binning.binOf(r[p >>> 16 & 0xFF] | g[p >>> 8 & 0xFF] | b[p & 0xFF]);
+                }
+            }
         }
     }
 

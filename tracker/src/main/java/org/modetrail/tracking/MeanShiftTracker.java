@@ -23,9 +23,24 @@ import org.modetrail.video.Frame;
  */
 public final class MeanShiftTracker implements Tracker {
     private static final int MAX_CANDIDATES = 4;
-    private static final int BACKGROUND_REFRESH_EVERY = 5;
+    /** Rate of the running mean of accepted similarities. */
+    private static final double TYPICAL_RATE = 0.1;
+    /** A frame must reach this fraction of the typical similarity (or the configured threshold, if lower). */
+    private static final double ACCEPT_FRACTION = 0.75;
+    private static final double ACCEPT_FLOOR = 0.35;
+    /** An observation this far above the acceptance threshold (or above the configured minimum) may update the model. */
+    private static final double UPDATE_MARGIN = 0.1;
+    /** The local result skips the wide search when this close to the typical similarity (or above confident). */
+    private static final double CONFIDENT_MARGIN = 0.1;
+    /** The model and the background are revisited every this many tracked frames. */
+    private static final int LEARN_EVERY = 5;
     /** A candidate may not be more background-like than the model by more than this, or it does not teach it. */
     private static final double UPDATE_BACKGROUND_GUARD = 0.05;
+    /** A new size may cost this much similarity (the coefficient varies that much with sub-pixel placement). */
+    private static final double SIZE_TOLERANCE = 0.005;
+    /** The box keeps between a sixteenth and sixteen times the area it started with. */
+    private static final double MIN_AREA_RATIO = 1.0 / 16;
+    private static final double MAX_AREA_RATIO = 16;
 
     private final TrackerConfig config;
     private final BinImage image;
@@ -36,7 +51,11 @@ public final class MeanShiftTracker implements Tracker {
     private final ConstantVelocityKalman kalman;
     private final MomentScaleEstimator moments;
     private final KernelHistogram observed;
+    private final IlluminationCompensation light;
     private Box box;
+    private double startArea;
+    /** Running mean of the similarity of accepted frames: what "normal" looks like for this object now. */
+    private double typicalSimilarity;
     private int coasting;
     private int tracked;
     private boolean started;
@@ -57,6 +76,7 @@ public final class MeanShiftTracker implements Tracker {
         kalman = new ConstantVelocityKalman(config.processNoise(), config.measurementNoise());
         moments = new MomentScaleEstimator(0.3, 0.08);
         observed = new KernelHistogram(bins);
+        light = config.compensateLighting() ? new IlluminationCompensation() : null;
     }
 
     public TrackerConfig config() {
@@ -72,12 +92,17 @@ public final class MeanShiftTracker implements Tracker {
             throw new IllegalArgumentException("the box " + start + " lies outside the " + frame.width() + "x"
                     + frame.height() + " frame " + frame.index());
         }
+        if (light != null) {
+            light.reset(frame, start);
+        }
         load(frame, start, Math.max(start.width(), start.height()));
         model.build(image, start);
         likelihood.update(model.target, model.background);
         moments.reset(image, likelihood, start);
         kalman.reset(start.centreX(), start.centreY());
         box = start;
+        startArea = start.area();
+        typicalSimilarity = 1;
         coasting = 0;
         tracked = 0;
         started = true;
@@ -98,6 +123,9 @@ public final class MeanShiftTracker implements Tracker {
             throw new IllegalStateException(lost ? "the track was lost; start it again on a new box"
                     : "start the tracker on a box first");
         }
+        if (light != null) {
+            light.update(frame, box);
+        }
         kalman.predict();
         Box predicted = box.movedTo(kalman.x(), kalman.y());
         double size = Math.max(box.width(), box.height());
@@ -111,7 +139,7 @@ public final class MeanShiftTracker implements Tracker {
         double drift = best.centreDistance(predicted) / diagonal;
         double bestScore = onClaimed ? Double.NEGATIVE_INFINITY : bestRho - config.motionPenalty() * drift * drift;
 
-        if (coasting > 0 || onClaimed || bestRho < config.confidentSimilarity() || drift > 0.75) {
+        if (coasting > 0 || onClaimed || bestRho < confidentThreshold() || drift > 0.75) {
             double radius = config.searchRadius() * size * (1 + 0.25 * coasting) + speed;
             load(frame, predicted, radius + size);
             int n = search.search(image, likelihood, box.width(), box.height(), claimed);
@@ -134,7 +162,8 @@ public final class MeanShiftTracker implements Tracker {
             }
         }
 
-        if (bestRho >= config.lostSimilarity()) {
+        if (bestRho >= acceptThreshold()) {
+            typicalSimilarity += TYPICAL_RATE * (bestRho - typicalSimilarity);
             best = adaptScale(best, bestRho);
             kalman.correct(best.centreX(), best.centreY());
             learn(best);
@@ -152,34 +181,75 @@ public final class MeanShiftTracker implements Tracker {
         return new TrackStep(frame.index(), predicted, bestRho, TrackStatus.COASTING);
     }
 
+    /**
+     * The similarity a frame needs to count as the object: the configured threshold, lowered when the object's
+     * typical similarity has drifted down slowly (lighting, pose), but never under {@link #ACCEPT_FLOOR}. A hidden
+     * object drops the similarity abruptly and still falls below it. Adapting the threshold to the running mean is
+     * common practice with no single source.
+     */
+    private double acceptThreshold() {
+        return Math.max(ACCEPT_FLOOR, Math.min(config.lostSimilarity(), ACCEPT_FRACTION * typicalSimilarity));
+    }
+
+    private double confidentThreshold() {
+        return Math.min(config.confidentSimilarity(), typicalSimilarity - CONFIDENT_MARGIN);
+    }
+
     private Box adaptScale(Box located, double rho) {
         switch (config.scale()) {
             case TEN_PERCENT:
                 return TenPercentScaleEstimator.adapt(localizer, image, located, located, rho, model.weighted,
                         model.target.values);
             case MOMENTS:
-                return moments.adapt(image, likelihood, located);
+                return validatedMomentSize(located, rho);
             default:
                 return located;
         }
     }
 
-    /** The guarded model update and the background refresh of Ning et al. */
+    /**
+     * The moment estimate proposes a size; it is taken only if the target candidate at that size is at least as
+     * similar to the model as at the old size (less a small tolerance), so clutter of the target's colours next to
+     * it cannot inflate the box step by step. A departure from SOAMST, which takes the moment size as it is.
+     */
+    private Box validatedMomentSize(Box located, double rho) {
+        Box proposed = moments.adapt(image, likelihood, located);
+        if (proposed == located) {
+            return located;
+        }
+        double grow = proposed.area() / startArea;
+        if (grow < MIN_AREA_RATIO || grow > MAX_AREA_RATIO) {
+            return located;
+        }
+        observed.compute(image, proposed);
+        return observed.bhattacharyya(model.target.values) >= rho - SIZE_TOLERANCE ? proposed : located;
+    }
+
+    /**
+     * Every few tracked frames: the guarded model update, then the background refresh of Ning et al. The guard
+     * compares the observation and the model with the background around the object now: an observation more like
+     * the background than the model is does not teach the model (so it cannot learn the floor it drifts onto).
+     * The blending rate per visit compounds the configured per-frame rate over the frames between visits.
+     */
     private void learn(Box at) {
+        if (tracked % LEARN_EVERY != 0) {
+            return;
+        }
+        float[] around = model.sampleBackground(image, at);
         boolean changed = false;
         if (config.modelUpdateRate() > 0) {
             observed.compute(image, at);
             double rho = observed.bhattacharyya(model.target.values);
-            double backgroundLikeNow = BhattacharyyaCoefficient.overBins(model.target.values, model.background,
+            double modelLikeBackground = BhattacharyyaCoefficient.overBins(model.target.values, around,
                     model.target.touched, model.target.touchedCount);
-            double backgroundLikeSeen = observed.bhattacharyya(model.background);
-            if (rho >= config.modelUpdateMinSimilarity()
-                    && backgroundLikeSeen <= backgroundLikeNow + UPDATE_BACKGROUND_GUARD) {
-                model.blend(observed, config.modelUpdateRate());
+            double seenLikeBackground = observed.bhattacharyya(around);
+            if (rho >= Math.min(config.modelUpdateMinSimilarity(), acceptThreshold() + UPDATE_MARGIN)
+                    && seenLikeBackground <= modelLikeBackground + UPDATE_BACKGROUND_GUARD) {
+                model.blend(observed, 1 - Math.pow(1 - config.modelUpdateRate(), LEARN_EVERY));
                 changed = true;
             }
         }
-        if (tracked % BACKGROUND_REFRESH_EVERY == 0 && model.refreshBackground(image, at, config.backgroundRefresh())) {
+        if (model.adoptSampledBackground(config.backgroundRefresh())) {
             changed = true;
         }
         if (changed) {
@@ -193,7 +263,7 @@ public final class MeanShiftTracker implements Tracker {
         int y0 = (int) Math.floor(around.centreY() - around.height() - margin);
         int x1 = (int) Math.ceil(around.centreX() + around.width() + margin);
         int y1 = (int) Math.ceil(around.centreY() + around.height() + margin);
-        image.load(frame, x0, y0, x1, y1);
+        image.load(frame, x0, y0, x1, y1, light);
     }
 
     private static boolean overlapsAny(Box b, List<Box> boxes) {

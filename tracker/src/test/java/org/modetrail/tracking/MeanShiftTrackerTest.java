@@ -69,7 +69,7 @@ class MeanShiftTrackerTest {
         }
         MeanShiftTracker tracker = new MeanShiftTracker();
         double worst = followAndReportWorstIou(tracker, scene, path);
-        assertTrue(worst > 0.6, "worst IoU " + worst);
+        assertTrue(worst > 0.8, "worst IoU " + worst);
         assertEquals(30, tracker.box().width(), 5, "final width follows the shrink to 30");
     }
 
