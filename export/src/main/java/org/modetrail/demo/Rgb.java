@@ -1,50 +1,50 @@
 package org.modetrail.demo;
 
 /** Packing of 8-bit colour channels into the {@code 0x00RRGGBB} ints the frame buffers hold. */
-final class Rgb {
+public final class Rgb {
 
     private Rgb() {
     }
 
-    static int pack(int r, int g, int b) {
+    public static int pack(int r, int g, int b) {
         return (clamp(r) << 16) | (clamp(g) << 8) | clamp(b);
     }
 
     /** Rounds and clamps; the renderers compute shading in floating point. */
-    static int pack(double r, double g, double b) {
+    public static int pack(double r, double g, double b) {
         return pack((int) Math.round(r), (int) Math.round(g), (int) Math.round(b));
     }
 
-    static int red(int rgb) {
+    public static int red(int rgb) {
         return (rgb >>> 16) & 0xFF;
     }
 
-    static int green(int rgb) {
+    public static int green(int rgb) {
         return (rgb >>> 8) & 0xFF;
     }
 
-    static int blue(int rgb) {
+    public static int blue(int rgb) {
         return rgb & 0xFF;
     }
 
     /** Every channel multiplied by {@code factor}: shading of a face or a shadow on the ground. */
-    static int scale(int rgb, double factor) {
+    public static int scale(int rgb, double factor) {
         return pack(red(rgb) * factor, green(rgb) * factor, blue(rgb) * factor);
     }
 
     /** Every channel moved by {@code delta}: grain that changes brightness but not hue. */
-    static int offset(int rgb, int delta) {
+    public static int offset(int rgb, int delta) {
         return pack(red(rgb) + delta, green(rgb) + delta, blue(rgb) + delta);
     }
 
     /** Linear blend, {@code t = 0} gives {@code a}. */
-    static int mix(int a, int b, double t) {
+    public static int mix(int a, int b, double t) {
         return pack(red(a) + (red(b) - red(a)) * t,
                 green(a) + (green(b) - green(a)) * t,
                 blue(a) + (blue(b) - blue(a)) * t);
     }
 
-    static int clamp(int v) {
+    public static int clamp(int v) {
         return v < 0 ? 0 : Math.min(v, 255);
     }
 }
