@@ -10,12 +10,12 @@ import org.modetrail.video.Frame;
  * spatial processor model for object colour perception", J. Franklin Inst. 310, 1980): with a fixed camera most of
  * the frame is background, so the frame mean follows the light, not the moving objects.
  *
- * <p>The means are taken on a sparse grid (every 8th pixel each way), smoothed over frames, and the gains are
+ * <p>The means are taken on a sparse grid (every 16th pixel each way), smoothed over frames, and the gains are
  * bounded; the per-channel lookup tables are rebuilt only when a gain moves by more than half a percent. All
  * buffers are made once.
  */
 final class IlluminationCompensation {
-    private static final int GRID = 8;
+    private static final int GRID = 16;
     private static final double SMOOTHING = 0.3;
     private static final double MIN_GAIN = 0.4;
     private static final double MAX_GAIN = 2.5;
@@ -29,6 +29,8 @@ final class IlluminationCompensation {
     final int[] green = new int[256];
     final int[] blue = new int[256];
     private boolean identity = true;
+    /** Counts table rebuilds, so users of the tables know when theirs are stale. */
+    private int version;
 
     IlluminationCompensation() {
         rebuild();
@@ -66,7 +68,17 @@ final class IlluminationCompensation {
         return 0xFF000000 | red[rgb >>> 16 & 0xFF] | green[rgb >>> 8 & 0xFF] | blue[rgb & 0xFF];
     }
 
+    int version() {
+        return version;
+    }
+
+    /** The compensated value of channel {@code c} (0 red, 1 green, 2 blue). */
+    int channel(int c, int v) {
+        return Math.min(255, (int) Math.round(v * tableGain[c]));
+    }
+
     private void rebuild() {
+        version++;
         identity = true;
         for (int c = 0; c < 3; c++) {
             tableGain[c] = gain[c];

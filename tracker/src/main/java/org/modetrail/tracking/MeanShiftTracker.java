@@ -23,6 +23,8 @@ import org.modetrail.video.Frame;
  */
 public final class MeanShiftTracker implements Tracker {
     private static final int MAX_CANDIDATES = 4;
+    /** Bins around the prediction reach this many box sizes beyond the moment window. */
+    private static final double LOCAL_MARGIN = 0.25;
     /** Rate of the running mean of accepted similarities. */
     private static final double TYPICAL_RATE = 0.1;
     /** A frame must reach this fraction of the typical similarity (or the configured threshold, if lower). */
@@ -92,10 +94,11 @@ public final class MeanShiftTracker implements Tracker {
             throw new IllegalArgumentException("the box " + start + " lies outside the " + frame.width() + "x"
                     + frame.height() + " frame " + frame.index());
         }
+        image.invalidate();
         if (light != null) {
             light.reset(frame, start);
         }
-        load(frame, start, Math.max(start.width(), start.height()));
+        load(frame, start, 1, 2);
         model.build(image, start);
         likelihood.update(model.target, model.background);
         moments.reset(image, likelihood, start);
@@ -123,6 +126,7 @@ public final class MeanShiftTracker implements Tracker {
             throw new IllegalStateException(lost ? "the track was lost; start it again on a new box"
                     : "start the tracker on a box first");
         }
+        image.invalidate();
         if (light != null) {
             light.update(frame, box);
         }
@@ -132,7 +136,8 @@ public final class MeanShiftTracker implements Tracker {
         double diagonal = Math.hypot(box.width(), box.height());
         double speed = Math.hypot(kalman.vx(), kalman.vy());
 
-        load(frame, predicted, size);
+        // Enough for mean shift to move a third of a box and for the moment window (1.6 boxes) around the result.
+        load(frame, predicted, 0.8, LOCAL_MARGIN * size);
         Box best = localizer.localize(image, predicted, model.weighted, model.target.values);
         double bestRho = localizer.similarity;
         boolean onClaimed = overlapsAny(best, claimed);
@@ -141,7 +146,7 @@ public final class MeanShiftTracker implements Tracker {
 
         if (coasting > 0 || onClaimed || bestRho < confidentThreshold() || drift > 0.75) {
             double radius = config.searchRadius() * size * (1 + 0.25 * coasting) + speed;
-            load(frame, predicted, radius + size);
+            load(frame, predicted, 1, radius);
             int n = search.search(image, likelihood, box.width(), box.height(), claimed);
             for (int i = 0; i < n; i++) {
                 Box candidate = localizer.localize(image, box.movedTo(search.x(i), search.y(i)), model.weighted,
@@ -166,7 +171,7 @@ public final class MeanShiftTracker implements Tracker {
             typicalSimilarity += TYPICAL_RATE * (bestRho - typicalSimilarity);
             best = adaptScale(best, bestRho);
             kalman.correct(best.centreX(), best.centreY());
-            learn(best);
+            learn(frame, best);
             box = best;
             coasting = 0;
             tracked++;
@@ -231,10 +236,11 @@ public final class MeanShiftTracker implements Tracker {
      * the background than the model is does not teach the model (so it cannot learn the floor it drifts onto).
      * The blending rate per visit compounds the configured per-frame rate over the frames between visits.
      */
-    private void learn(Box at) {
+    private void learn(Frame frame, Box at) {
         if (tracked % LEARN_EVERY != 0) {
             return;
         }
+        load(frame, at, 1, 1);
         float[] around = model.sampleBackground(image, at);
         boolean changed = false;
         if (config.modelUpdateRate() > 0) {
@@ -257,13 +263,18 @@ public final class MeanShiftTracker implements Tracker {
         }
     }
 
-    /** Bins the frame around {@code around}: the box, its background ring and {@code margin} more on each side. */
-    private void load(Frame frame, Box around, double margin) {
-        int x0 = (int) Math.floor(around.centreX() - around.width() - margin);
-        int y0 = (int) Math.floor(around.centreY() - around.height() - margin);
-        int x1 = (int) Math.ceil(around.centreX() + around.width() + margin);
-        int y1 = (int) Math.ceil(around.centreY() + around.height() + margin);
-        image.load(frame, x0, y0, x1, y1, light);
+    /**
+     * Bins the frame around {@code around}: {@code boxes} times the box's width and height, plus {@code margin}
+     * pixels on each side (1 box takes in the background ring, which reaches half a box beyond the box itself).
+     */
+    private void load(Frame frame, Box around, double boxes, double margin) {
+        int x0 = (int) Math.floor(around.centreX() - boxes * around.width() - margin);
+        int y0 = (int) Math.floor(around.centreY() - boxes * around.height() - margin);
+        int x1 = (int) Math.ceil(around.centreX() + boxes * around.width() + margin);
+        int y1 = (int) Math.ceil(around.centreY() + boxes * around.height() + margin);
+        if (!image.covers(frame, x0, y0, x1, y1)) {
+            image.load(frame, x0, y0, x1, y1, light);
+        }
     }
 
     private static boolean overlapsAny(Box b, List<Box> boxes) {
