@@ -14,6 +14,7 @@ import org.modetrail.video.Frame;
  */
 public final class ModetrailTracker implements BoxTracker {
     private final TrackerConfig config;
+    private final String label;
     private MeanShiftTracker tracker;
     private Frame frame;
     private int index;
@@ -25,12 +26,22 @@ public final class ModetrailTracker implements BoxTracker {
     }
 
     public ModetrailTracker(TrackerConfig config) {
+        this(config, "Modetrail");
+    }
+
+    /** A variant of the settings, named for the benchmark's table of settings. */
+    public ModetrailTracker(TrackerConfig config, String label) {
         this.config = config;
+        this.label = label;
+    }
+
+    TrackerConfig config() {
+        return config;
     }
 
     @Override
     public String name() {
-        return "Modetrail";
+        return label;
     }
 
     @Override

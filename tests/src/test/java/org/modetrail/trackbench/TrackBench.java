@@ -7,6 +7,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.Supplier;
 
+import org.modetrail.tracking.HueSaturationBinning;
+import org.modetrail.tracking.RgbBinning;
+import org.modetrail.tracking.ScaleMethod;
+import org.modetrail.tracking.TrackerConfig;
+
 /**
  * The tracking benchmark: per scenario kind, from the truth box of object 0 on frame 0, Modetrail's tracker against
  * BoofCV's Comaniciu 2003 and OpenCV's CamShift, all in this one run: OTB success AUC, precision at 20 px, frames
@@ -38,6 +43,54 @@ public final class TrackBench {
         try (BoxTracker t = make.get()) {
             return TrackRun.of(t, clip);
         }
+    }
+
+    /**
+     * Each default of {@link TrackerConfig} against its alternatives, by success AUC on every scenario: the evidence
+     * the defaults were chosen on (one setting changed at a time from the defaults).
+     */
+    static List<ModetrailTracker> settings() {
+        TrackerConfig d = TrackerConfig.defaults();
+        return List.of(
+                new ModetrailTracker(d, "defaults"),
+                new ModetrailTracker(d.withScale(ScaleMethod.TEN_PERCENT), "scale +-10%"),
+                new ModetrailTracker(d.withScale(ScaleMethod.FIXED), "scale fixed"),
+                new ModetrailTracker(d.withBinning(RgbBinning.COMANICIU), "RGB 16^3"),
+                new ModetrailTracker(d.withBinning(HueSaturationBinning.defaults()), "hue-sat"),
+                new ModetrailTracker(d.withBackgroundWeighting(false), "no CBWH"),
+                new ModetrailTracker(d.withLightingCompensation(false), "no light comp"),
+                new ModetrailTracker(d.withModelUpdateRate(0), "no update"),
+                new ModetrailTracker(d.withSearchRadius(0), "no wide search"));
+    }
+
+    private static void printSettingsTable(List<BenchClip> clips) {
+        List<ModetrailTracker> variants = settings();
+        System.out.println();
+        System.out.println("Modetrail's settings, success AUC (one change from the defaults per column):");
+        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "%-16s", "scenario"));
+        for (ModetrailTracker v : variants) {
+            head.append(String.format(Locale.ROOT, " %14s", v.name()));
+        }
+        System.out.println(head);
+        double[] total = new double[variants.size()];
+        for (BenchClip clip : clips) {
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-16s", clip.name()));
+            for (int i = 0; i < variants.size(); i++) {
+                ModetrailTracker v = variants.get(i);
+                double auc;
+                try (BoxTracker t = new ModetrailTracker(v.config(), v.name())) {
+                    auc = TrackRun.of(t, clip).score().successAuc();
+                }
+                total[i] += auc;
+                row.append(String.format(Locale.ROOT, " %14.3f", auc));
+            }
+            System.out.println(row);
+        }
+        StringBuilder mean = new StringBuilder(String.format(Locale.ROOT, "%-16s", "mean"));
+        for (double t : total) {
+            mean.append(String.format(Locale.ROOT, " %14.3f", t / clips.size()));
+        }
+        System.out.println(mean);
     }
 
     public static void main(String[] args) throws Exception {
@@ -89,6 +142,7 @@ public final class TrackBench {
         System.out.println("Ratios are of median ms per frame in this run (X/MT > 1: Modetrail faster). Targets "
                 + "(issue): AUC above both references (required on fast motion, clutter, occlusion), AUC >= 0.80, "
                 + "BoofCV/MT >= 10 and CamShift/MT >= 1.");
+        printSettingsTable(clips);
         try (var files = Files.walk(dir)) {
             files.sorted(java.util.Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
         }
