@@ -34,11 +34,14 @@ final class KernelHistogram {
 
     /** Fills this with the kernel-weighted histogram of {@code box} over {@code image}. */
     void compute(BinImage image, Box box) {
+        compute(image, box.centreX(), box.centreY(), box.width(), box.height());
+    }
+
+    /** The same for the box of {@code width x height} centred on (cx, cy), without making a box. */
+    void compute(BinImage image, double cx, double cy, double width, double height) {
         clear();
-        double cx = box.centreX();
-        double cy = box.centreY();
-        double ax = box.width() / 2;
-        double ay = box.height() / 2;
+        double ax = width / 2;
+        double ay = height / 2;
         if (ax <= 0 || ay <= 0) {
             return;
         }

@@ -16,7 +16,8 @@ import org.modetrail.model.Box;
  * With background weighting the weights use the corrected model q' of Ning et al. (see
  * {@link BackgroundWeightedModel}) while rho is measured against the plain model q.
  *
- * <p>No allocation per call: the candidate histograms are two buffers swapped between steps.
+ * <p>No allocation per iteration: the candidate histograms are two buffers swapped between steps, and positions
+ * are plain numbers until the result.
  */
 final class MeanShiftLocalizer {
     private static final int MAX_HALVINGS = 4;
@@ -28,6 +29,9 @@ final class MeanShiftLocalizer {
     /** sqrt(q'_u / p_u(y0)) per bin, filled for the bins of the current candidate only. */
     private final float[] binWeight;
 
+    /** The weighted mean found by the last {@link #weightedMean} call. */
+    private double meanX;
+    private double meanY;
     /** Outcome of the last {@link #localize} call. */
     double similarity;
     int iterations;
@@ -52,46 +56,51 @@ final class MeanShiftLocalizer {
      * @param model       q, against which rho is measured
      */
     Box localize(BinImage image, Box start, float[] weightModel, float[] model) {
-        Box y0 = start;
-        current.compute(image, y0);
+        double w = start.width();
+        double h = start.height();
+        double cx = start.centreX();
+        double cy = start.centreY();
+        current.compute(image, cx, cy, w, h);
         double rho0 = current.bhattacharyya(model);
         iterations = 0;
         while (iterations < maxIterations) {
             iterations++;
-            Box y1 = weightedMean(image, y0, weightModel);
-            if (y1 == null) {
+            if (!weightedMean(image, cx, cy, w, h, weightModel)) {
                 break;
             }
-            next.compute(image, y1);
+            double nx = meanX;
+            double ny = meanY;
+            next.compute(image, nx, ny, w, h);
             double rho1 = next.bhattacharyya(model);
-            for (int h = 0; h < MAX_HALVINGS && rho1 < rho0; h++) {
-                y1 = y1.movedTo((y0.centreX() + y1.centreX()) / 2, (y0.centreY() + y1.centreY()) / 2);
-                next.compute(image, y1);
+            for (int k = 0; k < MAX_HALVINGS && rho1 < rho0; k++) {
+                nx = (cx + nx) / 2;
+                ny = (cy + ny) / 2;
+                next.compute(image, nx, ny, w, h);
                 rho1 = next.bhattacharyya(model);
             }
-            double shift = y1.centreDistance(y0);
             if (rho1 < rho0) {
                 break; // no better place along the step: stay at the mode found
             }
+            double shift = Math.hypot(nx - cx, ny - cy);
             KernelHistogram t = current;
             current = next;
             next = t;
-            y0 = y1;
+            cx = nx;
+            cy = ny;
             rho0 = rho1;
             if (shift < epsilon) {
                 break;
             }
         }
         similarity = rho0;
-        return y0;
+        return start.centreX() == cx && start.centreY() == cy ? start : Box.centredAt(cx, cy, w, h);
     }
 
     /** Equation 26 with the Epanechnikov kernel: the mean of pixel positions weighted by sqrt(q'_u / p_u(y0)). */
-    private Box weightedMean(BinImage image, Box box, float[] weightModel) {
-        double cx = box.centreX();
-        double cy = box.centreY();
-        double ax = box.width() / 2;
-        double ay = box.height() / 2;
+    private boolean weightedMean(BinImage image, double cx, double cy, double width, double height,
+                                 float[] weightModel) {
+        double ax = width / 2;
+        double ay = height / 2;
         double invAx2 = 1 / (ax * ax);
         double invAy2 = 1 / (ay * ay);
         int xa = Math.max(image.x0(), (int) Math.floor(cx - ax));
@@ -132,8 +141,10 @@ final class MeanShiftLocalizer {
             sy += rowW * dy;
         }
         if (sw <= 0) {
-            return null;
+            return false;
         }
-        return box.movedTo(cx + sx / sw, cy + sy / sw);
+        meanX = cx + sx / sw;
+        meanY = cy + sy / sw;
+        return true;
     }
 }
