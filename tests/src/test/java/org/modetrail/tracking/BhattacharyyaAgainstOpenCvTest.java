@@ -157,7 +157,7 @@ class BhattacharyyaAgainstOpenCvTest {
 
     /** Our counts for the box, asserted equal to OpenCV calcHist's; returns ours. */
     static float[] checkedAgainstCalcHist(int[] rgb, int width, int height, Box box) {
-        float[] ours = Histograms.counts(rgb, width, box, RgbBinning.DEFAULT);
+        float[] ours = Histograms.counts(rgb, width, box, RgbBinning.COMANICIU);
         try (Mat image = new Mat(height, width, opencv_core.CV_8UC4);
                 Rect r = new Rect((int) box.x(), (int) box.y(), (int) box.width(), (int) box.height());
                 IntPointer channels = new IntPointer(2, 1, 0);

@@ -136,7 +136,7 @@ class FlatMeanShiftAgainstOpenCvTest {
         clip.render(0, f0);
         clip.render(8, f8);
         Box truth0 = BhattacharyyaAgainstOpenCvTest.snapped(clip.truth(0).box());
-        float[] hist = Histograms.normalised(Histograms.counts(f0, width, truth0, RgbBinning.DEFAULT));
+        float[] hist = Histograms.normalised(Histograms.counts(f0, width, truth0, RgbBinning.COMANICIU));
         float[] weights = backProject(f8, width, height, hist);
         double[] ours = ours(weights, width, height, truth0);
         double[] cv = openCvCentre(weights, width, height, truth0);
