@@ -22,15 +22,19 @@ final class BackgroundWeightedModel {
     /** The background-weighted target model q'_u used for the mean-shift weights. */
     final float[] weighted;
     /** Background histogram o_u (normalised, uniform weights over the ring). */
-    final float[] background;
-    private final float[] freshBackground;
+    final KernelHistogram background;
+    private final KernelHistogram freshBackground;
+    /** The bins of {@link #weighted} that are set, to clear them without a pass over every bin. */
+    private final int[] weightedBins;
+    private int weightedCount;
     private final boolean enabled;
 
     BackgroundWeightedModel(int binCount, boolean enabled) {
         target = new KernelHistogram(binCount);
         weighted = new float[binCount];
-        background = new float[binCount];
-        freshBackground = new float[binCount];
+        background = new KernelHistogram(binCount);
+        freshBackground = new KernelHistogram(binCount);
+        weightedBins = new int[binCount];
         this.enabled = enabled;
     }
 
@@ -44,7 +48,7 @@ final class BackgroundWeightedModel {
     /** Takes the background ring around {@code box} on the current frame, without adopting it yet. */
     float[] sampleBackground(BinImage image, Box box) {
         ring(image, box, freshBackground);
-        return freshBackground;
+        return freshBackground.values;
     }
 
     /**
@@ -55,11 +59,11 @@ final class BackgroundWeightedModel {
         if (!enabled) {
             return false;
         }
-        double rho = BhattacharyyaCoefficient.of(freshBackground, background);
+        double rho = freshBackground.bhattacharyya(background.values);
         if (rho >= threshold) {
             return false;
         }
-        System.arraycopy(freshBackground, 0, background, 0, background.length);
+        background.copyFrom(freshBackground);
         reweight();
         return true;
     }
@@ -84,36 +88,38 @@ final class BackgroundWeightedModel {
 
     private void reweight() {
         float[] q = target.values;
-        if (!enabled) {
-            System.arraycopy(q, 0, weighted, 0, q.length);
-            return;
+        for (int k = 0; k < weightedCount; k++) {
+            weighted[weightedBins[k]] = 0;
         }
+        weightedCount = 0;
+        float[] o = background.values;
         float oStar = Float.MAX_VALUE;
-        for (float o : background) {
-            if (o > 0 && o < oStar) {
-                oStar = o;
+        for (int k = 0; k < background.touchedCount; k++) {
+            float v = o[background.touched[k]];
+            if (v > 0 && v < oStar) {
+                oStar = v;
             }
         }
-        java.util.Arrays.fill(weighted, 0);
         double sum = 0;
         for (int k = 0; k < target.touchedCount; k++) {
             int u = target.touched[k];
-            float o = background[u];
-            float v = o > 0 ? Math.min(oStar / o, 1f) : 1f;
+            float v = !enabled || o[u] <= 0 ? 1f : Math.min(oStar / o[u], 1f);
             weighted[u] = v * q[u];
+            weightedBins[weightedCount++] = u;
             sum += weighted[u];
         }
         if (sum > 0) {
             float inv = (float) (1 / sum);
-            for (int k = 0; k < target.touchedCount; k++) {
-                weighted[target.touched[k]] *= inv;
+            for (int k = 0; k < weightedCount; k++) {
+                weighted[weightedBins[k]] *= inv;
             }
         }
     }
 
     /** Uniform histogram of the ring between {@code box} and the box twice its size, normalised. */
-    static void ring(BinImage image, Box box, float[] out) {
-        java.util.Arrays.fill(out, 0);
+    static void ring(BinImage image, Box box, KernelHistogram out) {
+        out.clear();
+        float[] values = out.values;
         int ix0 = (int) Math.floor(box.x());
         int iy0 = (int) Math.floor(box.y());
         int ix1 = (int) Math.ceil(box.right());
@@ -133,14 +139,19 @@ final class BackgroundWeightedModel {
                     x = ix1 - 1; // skip the box itself
                     continue;
                 }
-                out[bins[row + x]] += 1;
+                int u = bins[row + x];
+                if (values[u] == 0) {
+                    out.touched[out.touchedCount++] = u;
+                }
+                values[u] += 1;
                 count++;
             }
         }
+        out.mass = count;
         if (count > 0) {
             float inv = 1f / count;
-            for (int u = 0; u < out.length; u++) {
-                out[u] *= inv;
+            for (int k = 0; k < out.touchedCount; k++) {
+                values[out.touched[k]] *= inv;
             }
         }
     }

@@ -9,20 +9,29 @@ package org.modetrail.tracking;
  */
 final class ColourLikelihood {
     final float[] perBin;
+    private final int[] set;
+    private int setCount;
 
     ColourLikelihood(int binCount) {
         perBin = new float[binCount];
+        set = new int[binCount];
     }
 
     /** Recomputes the table from the plain target model and the background histogram. */
     void update(KernelHistogram target, float[] background) {
-        java.util.Arrays.fill(perBin, 0);
+        for (int k = 0; k < setCount; k++) {
+            perBin[set[k]] = 0;
+        }
+        setCount = 0;
         float[] q = target.values;
         for (int k = 0; k < target.touchedCount; k++) {
             int u = target.touched[k];
             float o = background[u];
             float c = (q[u] - o) / (q[u] + o);
-            perBin[u] = c > 0 ? c : 0;
+            if (c > 0) {
+                perBin[u] = c;
+                set[setCount++] = u;
+            }
         }
     }
 }

@@ -10,16 +10,16 @@ import org.modetrail.video.Frame;
  * spatial processor model for object colour perception", J. Franklin Inst. 310, 1980): with a fixed camera most of
  * the frame is background, so the frame mean follows the light, not the moving objects.
  *
- * <p>The means are taken on a sparse grid (every 16th pixel each way), smoothed over frames, and the gains are
- * bounded; the per-channel lookup tables are rebuilt only when a gain moves by more than half a percent. All
+ * <p>The means are taken on a sparse grid (every 32nd pixel each way: 300 samples at 640x480, each a cache miss on a fresh frame), smoothed over frames, and the gains are
+ * bounded; the per-channel lookup tables are rebuilt only when a gain moves by more than one percent. All
  * buffers are made once.
  */
 final class IlluminationCompensation {
-    private static final int GRID = 16;
+    private static final int GRID = 32;
     private static final double SMOOTHING = 0.3;
     private static final double MIN_GAIN = 0.4;
     private static final double MAX_GAIN = 2.5;
-    private static final double REBUILD = 0.005;
+    private static final double REBUILD = 0.01;
 
     private final double[] reference = new double[3];
     private final double[] now = new double[3];

@@ -100,7 +100,7 @@ public final class MeanShiftTracker implements Tracker {
         }
         load(frame, start, 1, 2);
         model.build(image, start);
-        likelihood.update(model.target, model.background);
+        likelihood.update(model.target, model.background.values);
         moments.reset(image, likelihood, start);
         kalman.reset(start.centreX(), start.centreY());
         box = start;
@@ -259,7 +259,7 @@ public final class MeanShiftTracker implements Tracker {
             changed = true;
         }
         if (changed) {
-            likelihood.update(model.target, model.background);
+            likelihood.update(model.target, model.background.values);
         }
     }
 
