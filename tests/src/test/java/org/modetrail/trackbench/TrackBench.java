@@ -59,7 +59,7 @@ public final class TrackBench {
                 new ModetrailTracker(d.withBinning(HueSaturationBinning.defaults()), "hue-sat"),
                 new ModetrailTracker(d.withBackgroundWeighting(false), "no CBWH"),
                 new ModetrailTracker(d.withLightingCompensation(false), "no light comp"),
-                new ModetrailTracker(d.withModelUpdateRate(0), "no update"),
+                new ModetrailTracker(d.withModelUpdateRate(0.02), "update 0.02"),
                 new ModetrailTracker(d.withSearchRadius(0), "no wide search"));
     }
 

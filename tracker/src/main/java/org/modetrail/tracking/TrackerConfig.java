@@ -20,8 +20,10 @@ package org.modetrail.tracking;
  *                             coasting); default 1.5
  * @param motionPenalty        weight of the squared distance from the prediction, in box diagonals, against the
  *                             similarity when choosing among candidates; default 0.15
- * @param modelUpdateRate      blending rate of the target model towards confident observations, 0 for none;
- *                             default 0.02
+ * @param modelUpdateRate      blending rate per frame of the target model towards confident observations, 0 for
+ *                             none; default 0 (the benchmark: mean AUC 0.905 without, 0.902 at 0.02, since the
+ *                             lighting compensation already follows global light; raise it for objects whose own
+ *                             appearance changes slowly)
  * @param modelUpdateMinSimilarity  observations this similar to the model update it, as do those 0.1 above the
  *                             (adaptive) acceptance threshold; default 0.85
  * @param backgroundRefresh    a background ring whose coefficient with the stored one is under this replaces it;
@@ -68,7 +70,7 @@ public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, 
     /** The benchmark's choice. */
     public static TrackerConfig defaults() {
         return new TrackerConfig(RgbBinning.DEFAULT, true, ScaleMethod.MOMENTS, 20, 0.5, 0.6, 0.8, 25, 1.5,
-                0.15, 0.02, 0.85, 0.8, 4, 4, true);
+                0.15, 0, 0.85, 0.8, 4, 4, true);
     }
 
     public TrackerConfig withLightingCompensation(boolean on) {

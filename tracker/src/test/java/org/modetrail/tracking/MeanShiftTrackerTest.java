@@ -108,6 +108,32 @@ class MeanShiftTrackerTest {
     }
 
     @Test
+    void theModelUpdateFollowsAnObjectWhoseOwnColourDrifts() {
+        // The floor stays as it is (so lighting compensation sees nothing); the object turns from red to orange.
+        SyntheticScene scene = new SyntheticScene(320, 240, RED, 12);
+        Box nowhere = new Box(-100, -100, 1, 1);
+        double[] finalSimilarity = new double[2];
+        double[] rates = {0, 0.05};
+        for (int k = 0; k < rates.length; k++) {
+            MeanShiftTracker tracker = new MeanShiftTracker(TrackerConfig.defaults().withModelUpdateRate(rates[k]));
+            Box b = new Box(100, 100, 40, 30);
+            tracker.start(scene.frame(0, nowhere, b, RED), b);
+            TrackStep step = null;
+            for (int i = 1; i <= 100; i++) {
+                Box at = b.movedTo(b.centreX() + i, b.centreY());
+                int green = 0x30 + i; // 0xC03020 to 0xC09420
+                step = tracker.track(scene.frame(i, nowhere, at, 0xFFC00020 | (green << 8)));
+                if (step.status() == TrackStatus.LOST) {
+                    break;
+                }
+            }
+            finalSimilarity[k] = step.status() == TrackStatus.LOST ? 0 : step.similarity();
+        }
+        assertTrue(finalSimilarity[1] > 0.6 && finalSimilarity[1] > finalSimilarity[0] + 0.1,
+                "with updates " + finalSimilarity[1] + ", without " + finalSimilarity[0] + " (0: lost)");
+    }
+
+    @Test
     void aBoxOutsideTheFrameIsRefused() {
         SyntheticScene scene = new SyntheticScene(100, 100, RED, 8);
         Frame f = scene.frame(0, new Box(10, 10, 10, 10));
