@@ -109,7 +109,8 @@ class MeanShiftTrackerTest {
 
     @Test
     void theModelUpdateFollowsAnObjectWhoseOwnColourDrifts() {
-        // The floor stays as it is (so lighting compensation sees nothing); the object turns from red to orange.
+        // The floor stays as it is (so lighting compensation sees nothing); the object's green rises by one level
+        // every sixth frame, from 0x30 to 0x40 over 100 frames: two of the default bins' widths.
         SyntheticScene scene = new SyntheticScene(320, 240, RED, 12);
         Box nowhere = new Box(-100, -100, 1, 1);
         double[] finalSimilarity = new double[2];
@@ -121,7 +122,7 @@ class MeanShiftTrackerTest {
             TrackStep step = null;
             for (int i = 1; i <= 100; i++) {
                 Box at = b.movedTo(b.centreX() + i, b.centreY());
-                int green = 0x30 + i; // 0xC03020 to 0xC09420
+                int green = 0x30 + i / 6;
                 step = tracker.track(scene.frame(i, nowhere, at, 0xFFC00020 | (green << 8)));
                 if (step.status() == TrackStatus.LOST) {
                     break;
