@@ -44,6 +44,25 @@ class MeanShiftTrackerTest {
     }
 
     @Test
+    void framesFedBackwardInTimeAreFollowedTheSameWay() {
+        SyntheticScene scene = new SyntheticScene(320, 240, RED, 9);
+        int n = 60;
+        Box[] path = new Box[n];
+        for (int i = 0; i < n; i++) {
+            path[i] = new Box(20 + 3 * i, 60 + i, 40, 30);
+        }
+        MeanShiftTracker tracker = new MeanShiftTracker();
+        tracker.start(scene.frame(n - 1, path[n - 1]), path[n - 1]);
+        double worst = 1;
+        for (int i = n - 2; i >= 0; i--) {
+            TrackStep step = tracker.track(scene.frame(i, path[i]));
+            assertEquals(i, step.frame());
+            worst = Math.min(worst, step.box().iou(path[i]));
+        }
+        assertTrue(worst > 0.7, "worst IoU going backward " + worst);
+    }
+
+    @Test
     void largeTranslationIsFollowedThroughTheWideSearch() {
         // 18 px a frame with the direction turning every 10 frames: beyond mean shift's reach from the prediction.
         SyntheticScene scene = new SyntheticScene(480, 360, RED, 3);
