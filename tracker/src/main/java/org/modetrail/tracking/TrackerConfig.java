@@ -69,49 +69,164 @@ public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, 
 
     /** The benchmark's choice. */
     public static TrackerConfig defaults() {
-        return new TrackerConfig(RgbBinning.DEFAULT, true, ScaleMethod.MOMENTS, 20, 0.5, 0.6, 0.8, 25, 1.5,
-                0.15, 0, 0.85, 0.8, 4, 4, true);
+        return new Builder().build();
+    }
+
+    /** A builder holding these settings, to change a few and build a new, validated config. */
+    public Builder toBuilder() {
+        return new Builder(this);
     }
 
     public TrackerConfig withLightingCompensation(boolean on) {
-        return new TrackerConfig(binning, backgroundWeighting, scale, maxIterations, convergencePx, lostSimilarity,
-                confidentSimilarity, maxCoastFrames, searchRadius, motionPenalty, modelUpdateRate,
-                modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise, on);
+        return toBuilder().compensateLighting(on).build();
     }
 
     public TrackerConfig withScale(ScaleMethod method) {
-        return new TrackerConfig(binning, backgroundWeighting, method, maxIterations, convergencePx, lostSimilarity,
-                confidentSimilarity, maxCoastFrames, searchRadius, motionPenalty, modelUpdateRate,
-                modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise, compensateLighting);
+        return toBuilder().scale(method).build();
     }
 
     public TrackerConfig withBinning(ColourBinning b) {
-        return new TrackerConfig(b, backgroundWeighting, scale, maxIterations, convergencePx, lostSimilarity,
-                confidentSimilarity, maxCoastFrames, searchRadius, motionPenalty, modelUpdateRate,
-                modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise, compensateLighting);
+        return toBuilder().binning(b).build();
     }
 
     public TrackerConfig withBackgroundWeighting(boolean on) {
-        return new TrackerConfig(binning, on, scale, maxIterations, convergencePx, lostSimilarity,
-                confidentSimilarity, maxCoastFrames, searchRadius, motionPenalty, modelUpdateRate,
-                modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise, compensateLighting);
+        return toBuilder().backgroundWeighting(on).build();
     }
 
     public TrackerConfig withSearchRadius(double radius) {
-        return new TrackerConfig(binning, backgroundWeighting, scale, maxIterations, convergencePx, lostSimilarity,
-                confidentSimilarity, maxCoastFrames, radius, motionPenalty, modelUpdateRate,
-                modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise, compensateLighting);
+        return toBuilder().searchRadius(radius).build();
     }
 
     public TrackerConfig withModelUpdateRate(double rate) {
-        return new TrackerConfig(binning, backgroundWeighting, scale, maxIterations, convergencePx, lostSimilarity,
-                confidentSimilarity, maxCoastFrames, searchRadius, motionPenalty, rate,
-                modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise, compensateLighting);
+        return toBuilder().modelUpdateRate(rate).build();
     }
 
     public TrackerConfig withSimilarityThresholds(double lost, double confident) {
-        return new TrackerConfig(binning, backgroundWeighting, scale, maxIterations, convergencePx, lost,
-                confident, maxCoastFrames, searchRadius, motionPenalty, modelUpdateRate,
-                modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise, compensateLighting);
+        return toBuilder().lostSimilarity(lost).confidentSimilarity(confident).build();
+    }
+
+    /** Named settings with the defaults documented on {@link TrackerConfig}; {@link #build()} validates them. */
+    public static final class Builder {
+        private ColourBinning binning = RgbBinning.DEFAULT;
+        private boolean backgroundWeighting = true;
+        private ScaleMethod scale = ScaleMethod.MOMENTS;
+        private int maxIterations = 20;
+        private double convergencePx = 0.5;
+        private double lostSimilarity = 0.6;
+        private double confidentSimilarity = 0.8;
+        private int maxCoastFrames = 25;
+        private double searchRadius = 1.5;
+        private double motionPenalty = 0.15;
+        private double modelUpdateRate = 0;
+        private double modelUpdateMinSimilarity = 0.85;
+        private double backgroundRefresh = 0.8;
+        private double processNoise = 4;
+        private double measurementNoise = 4;
+        private boolean compensateLighting = true;
+
+        public Builder() {
+        }
+
+        private Builder(TrackerConfig c) {
+            binning = c.binning;
+            backgroundWeighting = c.backgroundWeighting;
+            scale = c.scale;
+            maxIterations = c.maxIterations;
+            convergencePx = c.convergencePx;
+            lostSimilarity = c.lostSimilarity;
+            confidentSimilarity = c.confidentSimilarity;
+            maxCoastFrames = c.maxCoastFrames;
+            searchRadius = c.searchRadius;
+            motionPenalty = c.motionPenalty;
+            modelUpdateRate = c.modelUpdateRate;
+            modelUpdateMinSimilarity = c.modelUpdateMinSimilarity;
+            backgroundRefresh = c.backgroundRefresh;
+            processNoise = c.processNoise;
+            measurementNoise = c.measurementNoise;
+            compensateLighting = c.compensateLighting;
+        }
+
+        public Builder binning(ColourBinning v) {
+            binning = v;
+            return this;
+        }
+
+        public Builder backgroundWeighting(boolean v) {
+            backgroundWeighting = v;
+            return this;
+        }
+
+        public Builder scale(ScaleMethod v) {
+            scale = v;
+            return this;
+        }
+
+        public Builder maxIterations(int v) {
+            maxIterations = v;
+            return this;
+        }
+
+        public Builder convergencePx(double v) {
+            convergencePx = v;
+            return this;
+        }
+
+        public Builder lostSimilarity(double v) {
+            lostSimilarity = v;
+            return this;
+        }
+
+        public Builder confidentSimilarity(double v) {
+            confidentSimilarity = v;
+            return this;
+        }
+
+        public Builder maxCoastFrames(int v) {
+            maxCoastFrames = v;
+            return this;
+        }
+
+        public Builder searchRadius(double v) {
+            searchRadius = v;
+            return this;
+        }
+
+        public Builder motionPenalty(double v) {
+            motionPenalty = v;
+            return this;
+        }
+
+        public Builder modelUpdateRate(double v) {
+            modelUpdateRate = v;
+            return this;
+        }
+
+        public Builder modelUpdateMinSimilarity(double v) {
+            modelUpdateMinSimilarity = v;
+            return this;
+        }
+
+        public Builder backgroundRefresh(double v) {
+            backgroundRefresh = v;
+            return this;
+        }
+
+        public Builder kalmanNoise(double process, double measurement) {
+            processNoise = process;
+            measurementNoise = measurement;
+            return this;
+        }
+
+        public Builder compensateLighting(boolean v) {
+            compensateLighting = v;
+            return this;
+        }
+
+        public TrackerConfig build() {
+            return new TrackerConfig(binning, backgroundWeighting, scale, maxIterations, convergencePx,
+                    lostSimilarity, confidentSimilarity, maxCoastFrames, searchRadius, motionPenalty,
+                    modelUpdateRate, modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise,
+                    compensateLighting);
+        }
     }
 }
