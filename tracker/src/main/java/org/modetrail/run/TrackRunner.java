@@ -1,0 +1,191 @@
+package org.modetrail.run;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.function.BooleanSupplier;
+
+import org.modetrail.model.FrameAnnotation;
+import org.modetrail.model.Project;
+import org.modetrail.model.Track;
+import org.modetrail.tracking.TrackerConfig;
+import org.modetrail.video.Frame;
+import org.modetrail.video.VideoException;
+import org.modetrail.video.VideoSource;
+
+/**
+ * Turns keyframes into whole tracks. For each span to fill, the segments between consecutive keyframes are tracked
+ * forward from the earlier keyframe and backward from the later one; before the first keyframe the track runs
+ * backward to the start of the video or until lost, after the last forward to the end or until lost. Then
+ * {@link SpanFill} merges the two passes of each segment and interpolates where both lost the object.
+ *
+ * <p>All forward passes of all tracks share one sequential read of the video; all backward passes share one
+ * backward sweep, read in chunks that fit a memory budget (decoded forward, fed in reverse). Keyframes are never
+ * changed. Progress and cancellation are passed in, so the command line and the editor run the same code.
+ */
+public final class TrackRunner {
+    private final TrackerConfig config;
+    private final long backwardBudgetBytes;
+
+    /**
+     * @param config              the tracker's settings
+     * @param backwardBudgetBytes memory for the frames of one backward chunk; at least 8 frames are always held
+     */
+    public TrackRunner(TrackerConfig config, long backwardBudgetBytes) {
+        if (backwardBudgetBytes <= 0) {
+            throw new IllegalArgumentException("the backward budget must be positive");
+        }
+        this.config = config;
+        this.backwardBudgetBytes = backwardBudgetBytes;
+    }
+
+    public TrackRunner() {
+        this(TrackerConfig.defaults(), 256L << 20);
+    }
+
+    /** Tracks every track over the whole video. */
+    public Project trackAll(VideoSource video, Project project, RunProgress progress, BooleanSupplier cancelled)
+            throws VideoException {
+        List<Span> spans = new ArrayList<>();
+        for (Track t : project.tracks()) {
+            spans.add(new Span(t.id(), 0, video.frameCount() - 1));
+        }
+        return track(video, project, spans, progress, cancelled);
+    }
+
+    /** Tracks the given spans (an edit's, or whole tracks); tracked frames inside them are replaced. */
+    public Project track(VideoSource video, Project project, List<Span> spans, RunProgress progress,
+                         BooleanSupplier cancelled) throws VideoException {
+        List<Segment> segments = new ArrayList<>();
+        for (Span span : spans) {
+            Track t = project.track(span.trackId()).orElseThrow(
+                    () -> new IllegalArgumentException("no track " + span.trackId()));
+            segments.addAll(Segment.of(t, span, video.frameCount(), config));
+        }
+        List<Pass> forward = new ArrayList<>();
+        List<Pass> backward = new ArrayList<>();
+        long total = 0;
+        for (Segment s : segments) {
+            if (s.forward != null) {
+                forward.add(s.forward);
+                total += s.forward.length();
+            }
+            if (s.backward != null) {
+                backward.add(s.backward);
+                total += s.backward.length();
+            }
+        }
+        long[] done = {0};
+        long all = total;
+        sweepForward(video, forward, progress, cancelled, done, all);
+        sweepBackward(video, backward, progress, cancelled, done, all);
+
+        Project result = project;
+        for (Segment s : segments) {
+            Track t = result.track(s.trackId).orElseThrow();
+            TrackFrames.Builder b = TrackFrames.clearNonKeyframes(t, s.from, s.to);
+            for (FrameAnnotation a : s.fill()) {
+                if (t.at(a.frame()).map(FrameAnnotation::isKeyframe).orElse(false)) {
+                    continue;
+                }
+                b.put(a);
+            }
+            result = result.withTrack(b.build());
+        }
+        progress.frames(all, all);
+        return result;
+    }
+
+    private static void sweepForward(VideoSource video, List<Pass> passes, RunProgress progress,
+                                     BooleanSupplier cancelled, long[] done, long total) throws VideoException {
+        if (passes.isEmpty()) {
+            return;
+        }
+        int from = Integer.MAX_VALUE;
+        int to = Integer.MIN_VALUE;
+        for (Pass p : passes) {
+            from = Math.min(from, p.start);
+            to = Math.max(to, p.stop);
+        }
+        video.read(from, to + 1, frame -> {
+            if (cancelled.getAsBoolean()) {
+                throw new CancellationException("tracking cancelled at frame " + frame.index());
+            }
+            boolean any = false;
+            for (Pass p : passes) {
+                if (p.wants(frame.index())) {
+                    any = true;
+                    if (frame.index() != p.start) {
+                        done[0]++;
+                    }
+                    p.feed(frame);
+                }
+            }
+            progress.frames(done[0], total);
+            return any || frame.index() < maxStart(passes);
+        });
+    }
+
+    private void sweepBackward(VideoSource video, List<Pass> passes, RunProgress progress,
+                               BooleanSupplier cancelled, long[] done, long total) throws VideoException {
+        if (passes.isEmpty()) {
+            return;
+        }
+        int from = Integer.MAX_VALUE;
+        int to = Integer.MIN_VALUE;
+        for (Pass p : passes) {
+            from = Math.min(from, p.stop);
+            to = Math.max(to, p.start);
+        }
+        long frameBytes = (long) video.info().width() * video.info().height() * Integer.BYTES;
+        int chunk = (int) Math.max(8, Math.min(1024, backwardBudgetBytes / frameBytes));
+        List<Frame> held = new ArrayList<>(chunk);
+        for (int end = to + 1; end > from; end -= chunk) {
+            int begin = Math.max(from, end - chunk);
+            if (!anyWantsBetween(passes, begin, end - 1)) {
+                continue;
+            }
+            held.clear();
+            video.read(begin, end, f -> {
+                held.add(f.copy());
+                return true;
+            });
+            for (int i = held.size() - 1; i >= 0; i--) {
+                Frame frame = held.get(i);
+                if (cancelled.getAsBoolean()) {
+                    throw new CancellationException("tracking cancelled at frame " + frame.index());
+                }
+                for (Pass p : passes) {
+                    if (p.wants(frame.index())) {
+                        if (frame.index() != p.start) {
+                            done[0]++;
+                        }
+                        p.feed(frame);
+                    }
+                }
+                progress.frames(done[0], total);
+            }
+        }
+        held.clear();
+    }
+
+    /** Whether an unfinished pass visits any frame of {@code a..b}. */
+    private static boolean anyWantsBetween(List<Pass> passes, int a, int b) {
+        for (Pass p : passes) {
+            if (!p.finished() && Math.min(p.start, p.stop) <= b && Math.max(p.start, p.stop) >= a) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static int maxStart(List<Pass> passes) {
+        int m = -1;
+        for (Pass p : passes) {
+            if (!p.finished()) {
+                m = Math.max(m, p.start);
+            }
+        }
+        return m;
+    }
+}
