@@ -6,6 +6,7 @@ import org.modetrail.app.cli.ExitCodes;
 import org.modetrail.app.cli.FrameCommand;
 import org.modetrail.app.cli.InfoCommand;
 import org.modetrail.app.cli.MakeDemoCommand;
+import org.modetrail.app.cli.TrackCommand;
 import org.modetrail.app.editor.EditorLauncher;
 
 import java.util.concurrent.Callable;
@@ -16,7 +17,7 @@ import picocli.CommandLine.Command;
 /** The {@code modetrail} program: with no arguments it opens the editor, otherwise it runs one command. */
 @Command(name = "modetrail", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Turns video of moving objects into corrected, analysis-ready trajectories.",
-        subcommands = {InfoCommand.class, FrameCommand.class, DemoCommand.class, MakeDemoCommand.class,
+        subcommands = {TrackCommand.class, InfoCommand.class, FrameCommand.class, DemoCommand.class, MakeDemoCommand.class,
                 BenchCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "With no command, the editor opens.",
                 "Exit codes: 0 done, 1 failed, 2 bad input (the message names the file and frame)."})

@@ -1,0 +1,160 @@
+package org.modetrail.format.csv;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+
+import org.modetrail.model.Box;
+
+/**
+ * Reads a keyframes file: header {@code track_id,frame,x,y,width,height} (in any order, with an optional
+ * {@code class} column; other columns are refused so a typo does not pass unnoticed), one keyframe per row, frame
+ * 0-based, the box's top-left corner and size in pixels (decimals with a dot). Every problem names its line.
+ */
+public final class KeyframesCsv {
+    private static final List<String> REQUIRED = List.of("track_id", "frame", "x", "y", "width", "height");
+    private static final int MAX_ROWS = 10_000_000;
+
+    private KeyframesCsv() {
+    }
+
+    /**
+     * @param width      the video's frame width, to refuse boxes outside the frame
+     * @param height     the video's frame height
+     * @param frameCount the video's frames, to refuse frames beyond the end
+     */
+    public static List<KeyframeRow> read(Path file, int width, int height, int frameCount) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            throw new CsvFormatException(file, 0, "no such file; check the path given to --keyframes");
+        }
+        List<KeyframeRow> rows = new ArrayList<>();
+        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            String header = in.readLine();
+            if (header == null || header.isBlank()) {
+                throw new CsvFormatException(file, 1, "the file is empty; it needs the header "
+                        + String.join(",", REQUIRED));
+            }
+            Map<String, Integer> columns = columns(file, header.replace("\uFEFF", ""));
+            Set<Long> seen = new HashSet<>();
+            String text;
+            int line = 1;
+            while ((text = in.readLine()) != null) {
+                line++;
+                if (text.isBlank()) {
+                    continue;
+                }
+                if (rows.size() >= MAX_ROWS) {
+                    throw new CsvFormatException(file, line, "more than " + MAX_ROWS + " keyframes");
+                }
+                KeyframeRow row = parse(file, line, text, columns, width, height, frameCount);
+                long key = ((long) row.trackId() << 32) | row.frame();
+                if (!seen.add(key)) {
+                    throw new CsvFormatException(file, line, "track " + row.trackId() + " already has a keyframe on"
+                            + " frame " + row.frame() + "; keep one row per track and frame");
+                }
+                rows.add(row);
+            }
+        }
+        if (rows.isEmpty()) {
+            throw new CsvFormatException(file, 2, "no keyframes: add at least one row under the header");
+        }
+        return rows;
+    }
+
+    private static Map<String, Integer> columns(Path file, String header) throws CsvFormatException {
+        Map<String, Integer> columns = new HashMap<>();
+        List<String> names = CsvLine.split(header);
+        for (int i = 0; i < names.size(); i++) {
+            String name = names.get(i).toLowerCase(Locale.ROOT);
+            if (!REQUIRED.contains(name) && !name.equals("class")) {
+                throw new CsvFormatException(file, 1, "unknown column '" + names.get(i) + "'; the columns are "
+                        + String.join(",", REQUIRED) + " and optionally class");
+            }
+            if (columns.put(name, i) != null) {
+                throw new CsvFormatException(file, 1, "column '" + name + "' appears twice");
+            }
+        }
+        for (String r : REQUIRED) {
+            if (!columns.containsKey(r)) {
+                throw new CsvFormatException(file, 1, "the header lacks column '" + r + "'; it needs "
+                        + String.join(",", REQUIRED));
+            }
+        }
+        return columns;
+    }
+
+    private static KeyframeRow parse(Path file, int line, String text, Map<String, Integer> columns, int width,
+                                     int height, int frameCount) throws CsvFormatException {
+        List<String> f;
+        try {
+            f = CsvLine.split(text);
+        } catch (IllegalArgumentException e) {
+            throw new CsvFormatException(file, line, e.getMessage());
+        }
+        if (f.size() != columns.size()) {
+            throw new CsvFormatException(file, line, "has " + f.size() + " fields, the header " + columns.size());
+        }
+        int trackId = integer(file, line, f, columns, "track_id");
+        int frame = integer(file, line, f, columns, "frame");
+        double x = number(file, line, f, columns, "x");
+        double y = number(file, line, f, columns, "y");
+        double w = number(file, line, f, columns, "width");
+        double h = number(file, line, f, columns, "height");
+        if (trackId < 1) {
+            throw new CsvFormatException(file, line, "track_id must be 1 or more, got " + trackId);
+        }
+        if (frame < 0 || frame >= frameCount) {
+            throw new CsvFormatException(file, line, "frame " + frame + " is beyond the video, whose frames are 0 to "
+                    + (frameCount - 1));
+        }
+        if (!(w > 0) || !(h > 0)) {
+            throw new CsvFormatException(file, line, "the box needs a positive width and height, got " + w + "x" + h);
+        }
+        if (x < 0 || y < 0 || x + w > width || y + h > height) {
+            throw new CsvFormatException(file, line, "the box " + x + "," + y + " " + w + "x" + h + " reaches outside"
+                    + " the " + width + "x" + height + " frame");
+        }
+        String className = null;
+        if (columns.containsKey("class")) {
+            className = f.get(columns.get("class"));
+            if (className.isBlank()) {
+                throw new CsvFormatException(file, line, "the class is empty");
+            }
+        }
+        return new KeyframeRow(line, trackId, frame, new Box(x, y, w, h), className);
+    }
+
+    private static int integer(Path file, int line, List<String> f, Map<String, Integer> c, String name)
+            throws CsvFormatException {
+        String s = f.get(c.get(name));
+        try {
+            return Integer.parseInt(s);
+        } catch (NumberFormatException e) {
+            throw new CsvFormatException(file, line, name + " must be a whole number, got '" + s + "'");
+        }
+    }
+
+    private static double number(Path file, int line, List<String> f, Map<String, Integer> c, String name)
+            throws CsvFormatException {
+        String s = f.get(c.get(name));
+        try {
+            double v = Double.parseDouble(s);
+            if (!Double.isFinite(v) || s.contains(",")) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new CsvFormatException(file, line, name + " must be a number with a dot for decimals, got '" + s
+                    + "'");
+        }
+    }
+}

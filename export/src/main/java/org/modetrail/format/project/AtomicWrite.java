@@ -1,0 +1,120 @@
+package org.modetrail.format.project;
+
+import java.io.BufferedOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
+import java.nio.channels.FileChannel;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
+import java.util.function.UnaryOperator;
+
+/**
+ * Replaces a file so that it is at every moment either the complete old version or the complete new one, even if
+ * the process is killed or the machine loses power: the content goes to a temporary file in the same folder (so
+ * the rename stays on one file system), is forced to the disk, and is renamed over the target. The old version
+ * can be kept as NAME.bak, made the same way so that it too is never partial.
+ */
+final class AtomicWrite {
+
+    /** Something that writes bytes. */
+    interface Content {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    private AtomicWrite() {
+    }
+
+    static Path backupOf(Path target) {
+        return target.resolveSibling(target.getFileName() + ".bak");
+    }
+
+    /**
+     * @param wrap lets tests put a failing stream between the content and the file; {@code UnaryOperator.identity()}
+     *             otherwise
+     */
+    static void replace(Path target, boolean keepBackup, Content content, UnaryOperator<OutputStream> wrap)
+            throws IOException {
+        Path absolute = target.toAbsolutePath();
+        Path folder = absolute.getParent();
+        Files.createDirectories(folder);
+        Path temp = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".part");
+        boolean moved = false;
+        try {
+            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE,
+                    StandardOpenOption.TRUNCATE_EXISTING)) {
+                OutputStream out = new BufferedOutputStream(wrap.apply(Channels.newOutputStream(channel)), 1 << 16);
+                content.writeTo(out);
+                out.flush();
+                // Without this the rename can reach the disk before the data, leaving an empty file after a crash.
+                channel.force(true);
+            }
+            copyPermissions(absolute, temp);
+            if (keepBackup && Files.exists(absolute)) {
+                keepBackup(absolute, backupOf(absolute));
+            }
+            move(temp, absolute);
+            moved = true;
+            syncFolder(folder);
+        } finally {
+            if (!moved) {
+                Files.deleteIfExists(temp);
+            }
+        }
+    }
+
+    /** Makes NAME.bak the current file: a hard link where the file system has them (no copy), else a copy. */
+    private static void keepBackup(Path current, Path backup) throws IOException {
+        Path temp = Files.createTempFile(current.getParent(), "." + backup.getFileName() + ".", ".part");
+        try {
+            Files.delete(temp);
+            try {
+                Files.createLink(temp, current);
+            } catch (IOException | UnsupportedOperationException e) {
+                Files.copy(current, temp, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.COPY_ATTRIBUTES);
+                try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE)) {
+                    channel.force(true);
+                }
+            }
+            move(temp, backup);
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+
+    private static void move(Path from, Path to) throws IOException {
+        try {
+            Files.move(from, to, StandardCopyOption.ATOMIC_MOVE);
+        } catch (AtomicMoveNotSupportedException e) {
+            // Some file systems cannot rename atomically; replacing is the best they offer.
+            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
+        }
+    }
+
+    /** Temporary files are owner-only; the saved file keeps the old one's permissions, or the usual rw-r--r--. */
+    private static void copyPermissions(Path target, Path temp) throws IOException {
+        try {
+            Set<PosixFilePermission> permissions = Files.exists(target)
+                    ? Files.getPosixFilePermissions(target)
+                    : PosixFilePermissions.fromString("rw-r--r--");
+            Files.setPosixFilePermissions(temp, permissions);
+        } catch (UnsupportedOperationException e) {
+            // Not a POSIX file system: it has its own defaults.
+        }
+    }
+
+    /** Makes the rename itself durable. Not every system can open a folder (Windows cannot); there it is skipped. */
+    private static void syncFolder(Path folder) {
+        try (FileChannel channel = FileChannel.open(folder, StandardOpenOption.READ)) {
+            channel.force(true);
+        } catch (IOException | UnsupportedOperationException e) {
+            // The data is safe already; only the rename may be replayed differently after a power cut.
+        }
+    }
+}
