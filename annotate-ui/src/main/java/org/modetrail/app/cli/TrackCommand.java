@@ -25,6 +25,7 @@ import org.modetrail.model.ObjectClass;
 import org.modetrail.model.Project;
 import org.modetrail.model.Track;
 import org.modetrail.model.VideoRef;
+import org.modetrail.quality.TrackQualitySummary;
 import org.modetrail.run.RunProgress;
 import org.modetrail.run.TrackRunner;
 import org.modetrail.video.VideoOptions;
@@ -92,8 +93,12 @@ public final class TrackCommand implements Callable<Integer> {
             for (Track t : tracked.tracks()) {
                 rowsWritten += (int) t.frames().values().stream().filter(FrameAnnotation::isVisible).count();
             }
-            spec.commandLine().getOut().printf(Locale.ROOT, "%d tracks, %d boxes written to %s%n",
-                    tracked.tracks().size(), rowsWritten, out);
+            PrintWriter stdout = spec.commandLine().getOut();
+            stdout.printf(Locale.ROOT, "%d tracks, %d boxes written to %s%n", tracked.tracks().size(), rowsWritten,
+                    out);
+            for (Track t : tracked.tracks()) {
+                stdout.println(QualityLine.of(t, TrackQualitySummary.defaults().of(t, source.frameCount())));
+            }
         } catch (CsvFormatException e) {
             throw new BadInputException(e.getMessage(), e);
         }
