@@ -124,10 +124,10 @@ final class BackgroundWeightedModel {
         int iy0 = (int) Math.floor(box.y());
         int ix1 = (int) Math.ceil(box.right());
         int iy1 = (int) Math.ceil(box.bottom());
-        int ox0 = Math.max(image.x0(), (int) Math.floor(box.centreX() - box.width()));
-        int oy0 = Math.max(image.y0(), (int) Math.floor(box.centreY() - box.height()));
-        int ox1 = Math.min(image.x0() + image.width(), (int) Math.ceil(box.centreX() + box.width()));
-        int oy1 = Math.min(image.y0() + image.height(), (int) Math.ceil(box.centreY() + box.height()));
+        int ox0 = image.firstColumn(box.centreX() - box.width());
+        int oy0 = image.firstRow(box.centreY() - box.height());
+        int ox1 = image.endColumn(box.centreX() + box.width());
+        int oy1 = image.endRow(box.centreY() + box.height());
         int[] bins = image.raw();
         int stride = image.width();
         int count = 0;

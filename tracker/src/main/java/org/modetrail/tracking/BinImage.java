@@ -121,6 +121,26 @@ final class BinImage {
         return height;
     }
 
+    /** The first column of a window whose left edge is at {@code left}, clipped to the region (frame coordinates). */
+    int firstColumn(double left) {
+        return Math.max(x0, (int) Math.floor(left));
+    }
+
+    /** One past the last column of a window whose right edge is at {@code right}, clipped to the region. */
+    int endColumn(double right) {
+        return Math.min(x0 + width, (int) Math.ceil(right));
+    }
+
+    /** The first row of a window whose top edge is at {@code top}, clipped to the region. */
+    int firstRow(double top) {
+        return Math.max(y0, (int) Math.floor(top));
+    }
+
+    /** One past the last row of a window whose bottom edge is at {@code bottom}, clipped to the region. */
+    int endRow(double bottom) {
+        return Math.min(y0 + height, (int) Math.ceil(bottom));
+    }
+
     /** Bin at absolute frame coordinates; the caller keeps inside the region. */
     int binAt(int x, int y) {
         return bins[(y - y0) * width + (x - x0)];

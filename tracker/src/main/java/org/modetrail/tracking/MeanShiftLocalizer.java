@@ -103,10 +103,10 @@ final class MeanShiftLocalizer {
         double ay = height / 2;
         double invAx2 = 1 / (ax * ax);
         double invAy2 = 1 / (ay * ay);
-        int xa = Math.max(image.x0(), (int) Math.floor(cx - ax));
-        int xb = Math.min(image.x0() + image.width(), (int) Math.ceil(cx + ax));
-        int ya = Math.max(image.y0(), (int) Math.floor(cy - ay));
-        int yb = Math.min(image.y0() + image.height(), (int) Math.ceil(cy + ay));
+        int xa = image.firstColumn(cx - ax);
+        int xb = image.endColumn(cx + ax);
+        int ya = image.firstRow(cy - ay);
+        int yb = image.endRow(cy + ay);
         int[] bins = image.raw();
         int stride = image.width();
         float[] p = current.values;

@@ -61,10 +61,10 @@ final class MomentScaleEstimator {
     private boolean measure(BinImage image, ColourLikelihood likelihood, Box box) {
         double hw = box.width() * WINDOW / 2;
         double hh = box.height() * WINDOW / 2;
-        int xa = Math.max(image.x0(), (int) Math.floor(box.centreX() - hw));
-        int xb = Math.min(image.x0() + image.width(), (int) Math.ceil(box.centreX() + hw));
-        int ya = Math.max(image.y0(), (int) Math.floor(box.centreY() - hh));
-        int yb = Math.min(image.y0() + image.height(), (int) Math.ceil(box.centreY() + hh));
+        int xa = image.firstColumn(box.centreX() - hw);
+        int xb = image.endColumn(box.centreX() + hw);
+        int ya = image.firstRow(box.centreY() - hh);
+        int yb = image.endRow(box.centreY() + hh);
         int[] bins = image.raw();
         float[] c = likelihood.perBin;
         int stride = image.width();
