@@ -39,11 +39,16 @@ final class LayoutPrinter implements PrettyPrinter {
         multiline.push(isMultiline(multiline.size() + 1, false));
     }
 
-    @Override
-    public void beforeObjectEntries(JsonGenerator g) throws IOException {
+    /** A line break if the current object or array is laid out over several lines. */
+    private void breakIfMultiline(JsonGenerator g) throws IOException {
         if (multiline.peek()) {
             newLine(g, multiline.size());
         }
+    }
+
+    @Override
+    public void beforeObjectEntries(JsonGenerator g) throws IOException {
+        breakIfMultiline(g);
     }
 
     @Override
@@ -78,17 +83,13 @@ final class LayoutPrinter implements PrettyPrinter {
 
     @Override
     public void beforeArrayValues(JsonGenerator g) throws IOException {
-        if (multiline.peek()) {
-            newLine(g, multiline.size());
-        }
+        breakIfMultiline(g);
     }
 
     @Override
     public void writeArrayValueSeparator(JsonGenerator g) throws IOException {
         g.writeRaw(',');
-        if (multiline.peek()) {
-            newLine(g, multiline.size());
-        }
+        breakIfMultiline(g);
     }
 
     @Override
