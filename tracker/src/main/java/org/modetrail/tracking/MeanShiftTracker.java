@@ -16,7 +16,9 @@ import org.modetrail.video.Frame;
  * <li>a wide search over a back-projected colour likelihood with an integral image ({@link LikelihoodSearch}) when
  * the local result is weak, far from the prediction, or on another object, with candidates chosen by similarity
  * and distance from the prediction;</li>
- * <li>size from moments ({@link MomentScaleEstimator}) or the +-10% rule ({@link TenPercentScaleEstimator});</li>
+ * <li>size from moments ({@link MomentScaleEstimator}) or the +-10% rule ({@link TenPercentScaleEstimator}),
+ * kept from shrinking while one side of the object is covered or after it was hidden
+ * ({@link PartialOcclusion});</li>
  * <li>a guarded slow update of the target model, and loss declared when similarity stays low.</li>
  * </ul>
  * Per frame it bins only a region around the prediction once and works on primitive buffers made at start.
@@ -43,6 +45,10 @@ public final class MeanShiftTracker implements Tracker {
     /** The box keeps between a sixteenth and sixteen times the area it started with. */
     private static final double MIN_AREA_RATIO = 1.0 / 16;
     private static final double MAX_AREA_RATIO = 16;
+    /** A held size is released once the similarity is back within this of the typical one, */
+    private static final double RECOVERED_MARGIN = 0.05;
+    /** or after this many frames seen since the hold began. */
+    private static final int MAX_HELD_FRAMES = 25;
 
     private final TrackerConfig config;
     private final BinImage image;
@@ -54,6 +60,7 @@ public final class MeanShiftTracker implements Tracker {
     private final MomentScaleEstimator moments;
     private final KernelHistogram observed;
     private final IlluminationCompensation light;
+    private final PartialOcclusion occlusion;
     private Box box;
     private double startArea;
     /** Running mean of the similarity of accepted frames: what "normal" looks like for this object now. */
@@ -62,6 +69,11 @@ public final class MeanShiftTracker implements Tracker {
     private int tracked;
     private boolean started;
     private boolean lost;
+    /** The object is (or was lately) partly or wholly hidden: its size and typical similarity are held. */
+    private boolean holding;
+    private int heldFrames;
+    /** The typical similarity when the hold began: what the whole object in view looks like. */
+    private double similarityBeforeHold;
 
     public MeanShiftTracker() {
         this(TrackerConfig.defaults());
@@ -79,6 +91,7 @@ public final class MeanShiftTracker implements Tracker {
         moments = new MomentScaleEstimator(0.3, 0.08);
         observed = new KernelHistogram(bins);
         light = config.compensateLighting() ? new IlluminationCompensation() : null;
+        occlusion = new PartialOcclusion(bins);
     }
 
     public TrackerConfig config() {
@@ -100,6 +113,7 @@ public final class MeanShiftTracker implements Tracker {
         }
         load(frame, start, 1, 2);
         model.build(image, start);
+        occlusion.build(image, start);
         likelihood.update(model.target, model.background.values);
         moments.reset(image, likelihood, start);
         kalman.reset(start.centreX(), start.centreY());
@@ -110,6 +124,8 @@ public final class MeanShiftTracker implements Tracker {
         tracked = 0;
         started = true;
         lost = false;
+        holding = false;
+        heldFrames = 0;
     }
 
     @Override
@@ -168,8 +184,10 @@ public final class MeanShiftTracker implements Tracker {
         }
 
         if (bestRho >= acceptThreshold()) {
+            updateHolding(best, bestRho);
             typicalSimilarity += TYPICAL_RATE * (bestRho - typicalSimilarity);
-            best = adaptScale(best, bestRho);
+            Box sized = adaptScale(best, bestRho);
+            best = holding ? noSmallerThan(sized, best) : sized;
             kalman.correct(best.centreX(), best.centreY());
             learn(frame, best);
             box = best;
@@ -178,12 +196,36 @@ public final class MeanShiftTracker implements Tracker {
             return new TrackStep(frame.index(), best, bestRho, TrackStatus.TRACKED);
         }
         coasting++;
+        if (!holding) {
+            holding = true;
+            similarityBeforeHold = typicalSimilarity;
+        }
+        heldFrames = 0;
         box = predicted;
         if (coasting > config.maxCoastFrames()) {
             lost = true;
             return new TrackStep(frame.index(), predicted, bestRho, TrackStatus.LOST);
         }
         return new TrackStep(frame.index(), predicted, bestRho, TrackStatus.COASTING);
+    }
+
+    /**
+     * While one side of the object looks covered, and after it was hidden, its box may grow but not shrink (the
+     * scale estimate would shrink it onto the visible part), until the similarity is back near what it was before with no side covered, or {@link #MAX_HELD_FRAMES} seen frames have passed
+     * (the object may really have changed size while it was covered).
+     */
+    private void updateHolding(Box at, double rho) {
+        boolean covered = occlusion.oneSideCovered(image, at);
+        if (!holding) {
+            holding = covered;
+            heldFrames = 0;
+            similarityBeforeHold = typicalSimilarity;
+        } else if (++heldFrames > MAX_HELD_FRAMES || !covered && rho >= similarityBeforeHold - RECOVERED_MARGIN) {
+            holding = false;
+        }
+        if (!holding) {
+            occlusion.learnUsual();
+        }
     }
 
     /**
@@ -198,6 +240,15 @@ public final class MeanShiftTracker implements Tracker {
 
     private double confidentThreshold() {
         return Math.min(config.confidentSimilarity(), typicalSimilarity - CONFIDENT_MARGIN);
+    }
+
+    /** {@code sized}, but at least as wide and as high as {@code held}: a covered object only grows back. */
+    private static Box noSmallerThan(Box sized, Box held) {
+        if (sized.width() >= held.width() && sized.height() >= held.height()) {
+            return sized;
+        }
+        return Box.centredAt(sized.centreX(), sized.centreY(), Math.max(sized.width(), held.width()),
+                Math.max(sized.height(), held.height()));
     }
 
     private Box adaptScale(Box located, double rho) {

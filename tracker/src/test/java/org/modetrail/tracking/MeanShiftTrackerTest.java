@@ -93,6 +93,33 @@ class MeanShiftTrackerTest {
     }
 
     @Test
+    void anObjectPassingBehindAPostKeepsItsSizeAndIsFoundAgain() {
+        // 60 x 40 px moving right at 2.5 px a frame behind a post 80 px wide: wholly hidden for 8 frames. The
+        // box must not shrink onto the visible part (it would lag the object as it emerges): on every frame
+        // with at least half the body in view the box overlaps the whole body by IoU 0.5 or more.
+        SyntheticScene scene = new SyntheticScene(400, 200, RED, 23);
+        int postFrom = 160;
+        int postTo = 240;
+        MeanShiftTracker tracker = new MeanShiftTracker();
+        Box start = new Box(40, 80, 60, 40);
+        tracker.start(scene.frameBehindPost(0, start, postFrom, postTo), start);
+        double worst = 1;
+        int judged = 0;
+        for (int i = 1; i < 110; i++) {
+            Box truth = new Box(40 + 2.5 * i, 80 + 0.3 * i, 60, 40);
+            TrackStep step = tracker.track(scene.frameBehindPost(i, truth, postFrom, postTo));
+            double hidden = Math.max(0, Math.min(truth.right(), postTo) - Math.max(truth.x(), postFrom));
+            if (hidden / truth.width() <= 0.5) {
+                worst = Math.min(worst, step.status() == TrackStatus.TRACKED ? step.box().iou(truth) : 0);
+                judged++;
+            }
+        }
+        assertTrue(judged > 60, "judged frames " + judged);
+        assertTrue(worst >= 0.5, "worst IoU on frames at least half in view " + worst);
+        assertEquals(60, tracker.box().width(), 6, "width after the post");
+    }
+
+    @Test
     void theTrackerCanBeStartedAgainOnAnotherImageSize() {
         MeanShiftTracker tracker = new MeanShiftTracker();
         SyntheticScene small = new SyntheticScene(160, 120, RED, 5);

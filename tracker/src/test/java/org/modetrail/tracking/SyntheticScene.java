@@ -45,6 +45,18 @@ final class SyntheticScene {
         return new Frame(index, index / 25.0, width, height, rgb);
     }
 
+    /** The frame with a grey post covering the columns {@code postFrom..postTo-1} in front of the object. */
+    Frame frameBehindPost(int index, Box box, int postFrom, int postTo) {
+        int[] rgb = floor.clone();
+        paint(rgb, index, box, colour);
+        for (int y = 0; y < height; y++) {
+            for (int x = Math.max(0, postFrom); x < Math.min(width, postTo); x++) {
+                rgb[y * width + x] = 0xFF526076;
+            }
+        }
+        return new Frame(index, index / 25.0, width, height, rgb);
+    }
+
     private void paint(int[] rgb, int index, Box box, int colour) {
         Random r = new Random(seed * 31 + index);
         double cx = box.centreX();
