@@ -6,14 +6,17 @@ import java.io.OutputStream;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.time.Duration;
 import java.util.Set;
 import java.util.function.UnaryOperator;
+import java.util.regex.Pattern;
 
 /**
  * Replaces a file so that it is at every moment either the complete old version or the complete new one, even if
@@ -22,6 +25,8 @@ import java.util.function.UnaryOperator;
  * can be kept as NAME.bak, made the same way so that it too is never partial.
  */
 final class AtomicWrite {
+    /** A temporary file untouched this long belongs to a write that was killed. */
+    static final Duration LEFTOVER_AGE = Duration.ofMinutes(2);
 
     /** Something that writes bytes. */
     interface Content {
@@ -62,10 +67,31 @@ final class AtomicWrite {
             move(temp, absolute);
             moved = true;
             syncFolder(folder);
+            removeLeftovers(absolute);
         } finally {
             if (!moved) {
                 Files.deleteIfExists(temp);
             }
+        }
+    }
+
+    /**
+     * Deletes the temporary files a killed earlier write of {@code target} (or of its backup) left behind: those
+     * named like ours and untouched for {@link #LEFTOVER_AGE}, so a write still in flight is never disturbed.
+     */
+    static void removeLeftovers(Path target) {
+        // Files.createTempFile puts a decimal number between the prefix and the suffix.
+        Pattern ours = Pattern.compile(Pattern.quote("." + target.getFileName()) + "(\\.bak)?\\.\\d+\\.part");
+        long cutoff = System.currentTimeMillis() - LEFTOVER_AGE.toMillis();
+        try (DirectoryStream<Path> parts = Files.newDirectoryStream(target.getParent(), "*.part")) {
+            for (Path p : parts) {
+                if (ours.matcher(p.getFileName().toString()).matches()
+                        && Files.getLastModifiedTime(p).toMillis() < cutoff) {
+                    Files.deleteIfExists(p);
+                }
+            }
+        } catch (IOException e) {
+            // Leftovers cost only space; the save itself has succeeded.
         }
     }
 

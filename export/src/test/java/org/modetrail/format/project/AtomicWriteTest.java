@@ -2,6 +2,7 @@ package org.modetrail.format.project;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -75,6 +76,29 @@ class AtomicWriteTest {
         ProjectFile.write(SampleProjects.small(), file);
         assertEquals(second, ProjectFile.read(ProjectFile.backupFile(file)), "the backup is the version before");
         assertEquals(List.of("p.json", "p.json.bak"), Arrays.stream(dir.toFile().list()).sorted().toList());
+    }
+
+    @Test
+    void aSaveRemovesTheTemporaryFilesOfAKilledEarlierSaveButNotOthers() throws Exception {
+        Path file = dir.resolve("p.json");
+        long old = System.currentTimeMillis() - AtomicWrite.LEFTOVER_AGE.toMillis() - 60_000;
+        Path killed = touch(".p.json.4417230598812.part", old);
+        Path killedBackup = touch(".p.json.bak.90813.part", old);
+        Path inFlight = touch(".p.json.5521.part", System.currentTimeMillis());
+        Path otherFiles = touch(".p.json.recovery.7710.part", old);
+        Path userFile = touch("notes.part", old);
+        ProjectFile.write(SampleProjects.small(), file);
+        assertFalse(Files.exists(killed));
+        assertFalse(Files.exists(killedBackup));
+        assertTrue(Files.exists(inFlight), "a recent temporary file may be a save in progress");
+        assertTrue(Files.exists(otherFiles), "the recovery file's temporaries are its own writer's business");
+        assertTrue(Files.exists(userFile));
+    }
+
+    private Path touch(String name, long modifiedMillis) throws IOException {
+        Path p = Files.writeString(dir.resolve(name), "{\"partial");
+        Files.setLastModifiedTime(p, java.nio.file.attribute.FileTime.fromMillis(modifiedMillis));
+        return p;
     }
 
     /**
