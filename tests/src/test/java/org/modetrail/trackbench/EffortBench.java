@@ -3,6 +3,8 @@ package org.modetrail.trackbench;
 import java.util.List;
 import java.util.Locale;
 
+import org.modetrail.run.PassMerge;
+
 /**
  * The effort table: keyframes a simulated annotator adds per 1000 frames on each scenario, for Modetrail, plain
  * interpolation, and the two reference trackers restarted at each keyframe ({@link EffortSimulation}). Run with
@@ -30,5 +32,41 @@ public final class EffortBench {
             System.out.printf(Locale.ROOT, "%-16s %10.1f %14.1f %10.1f %10.1f  %s%n", clip.name(), k[0], k[1], k[2],
                     k[3], met ? "yes" : "NO");
         }
+        mergeTable();
+    }
+
+    /**
+     * How the forward and backward passes merge, judged by the same annotator made stricter: at IoU 0.5 both merges
+     * need no keyframe after the first on any scenario, so they are compared where keyframes are needed.
+     */
+    static void mergeTable() throws Exception {
+        double[] strict = {0.7, 0.8};
+        System.out.printf(Locale.ROOT, "%nkeyframes per 1000 frames for a stricter annotator, by pass merge%n");
+        System.out.printf(Locale.ROOT, "%-16s", "scenario");
+        for (double s : strict) {
+            for (PassMerge m : PassMerge.values()) {
+                System.out.printf(Locale.ROOT, " %18s", m.name().toLowerCase(Locale.ROOT) + "@" + s);
+            }
+        }
+        System.out.println();
+        double[] sum = new double[strict.length * PassMerge.values().length];
+        for (BenchClip clip : ScenarioClips.all()) {
+            RenderedVideo video = new RenderedVideo(clip);
+            System.out.printf(Locale.ROOT, "%-16s", clip.name());
+            int c = 0;
+            for (double s : strict) {
+                for (PassMerge m : PassMerge.values()) {
+                    double k = EffortSimulation.keyframesPer1000(clip, video, EffortSimulation.modetrail(m), s);
+                    sum[c++] += k;
+                    System.out.printf(Locale.ROOT, " %18.1f", k);
+                }
+            }
+            System.out.println();
+        }
+        System.out.printf(Locale.ROOT, "%-16s", "total");
+        for (double v : sum) {
+            System.out.printf(Locale.ROOT, " %18.1f", v);
+        }
+        System.out.println();
     }
 }

@@ -12,6 +12,7 @@ import org.modetrail.model.Project;
 import org.modetrail.model.Track;
 import org.modetrail.model.VideoRef;
 import org.modetrail.run.LinearInterpolation;
+import org.modetrail.run.PassMerge;
 import org.modetrail.run.RunProgress;
 import org.modetrail.run.TrackRunner;
 import org.modetrail.video.VideoException;
@@ -33,8 +34,17 @@ public final class EffortSimulation {
     private EffortSimulation() {
     }
 
+    /** The annotator's pass mark: a frame whose box has at least this IoU with the truth needs no keyframe. */
+    public static final double PASS_IOU = 0.5;
+
     /** Keyframes the annotator added per 1000 frames. */
     public static double keyframesPer1000(BenchClip clip, RenderedVideo video, Filler filler) throws VideoException {
+        return keyframesPer1000(clip, video, filler, PASS_IOU);
+    }
+
+    /** The same for a stricter (or laxer) annotator, who passes a frame only at IoU {@code passIou} or more. */
+    public static double keyframesPer1000(BenchClip clip, RenderedVideo video, Filler filler, double passIou)
+            throws VideoException {
         TreeMap<Integer, Box> keys = new TreeMap<>();
         keys.put(0, clip.truth(0).box());
         int added = 0;
@@ -46,7 +56,7 @@ public final class EffortSimulation {
                 if (t.visible() < 0.5 || keys.containsKey(f)) {
                     continue;
                 }
-                if (boxes[f] == null || boxes[f].iou(t.box()) < 0.5) {
+                if (boxes[f] == null || boxes[f].iou(t.box()) < passIou) {
                     bad = f;
                     break;
                 }
@@ -62,12 +72,17 @@ public final class EffortSimulation {
 
     /** Modetrail: the track runner over the keyframes, as the track command runs it. */
     public static Filler modetrail() {
-        TrackRunner runner = new TrackRunner();
+        return modetrail(TrackRunner.DEFAULT_MERGE);
+    }
+
+    /** Modetrail with the passes of each segment merged as {@code merge} says. */
+    public static Filler modetrail(PassMerge merge) {
+        TrackRunner runner = new TrackRunner(merge);
         ObjectClass cls = new ObjectClass("target", 0xE69F00);
         return new Filler() {
             @Override
             public String name() {
-                return "Modetrail";
+                return "Modetrail " + merge;
             }
 
             @Override

@@ -54,9 +54,9 @@ final class Segment {
         return out;
     }
 
-    List<FrameAnnotation> fill() {
+    List<FrameAnnotation> fill(PassMerge merge) {
         PassResult f = forward != null ? forward.result : new PassResult(from, from - 1);
         PassResult b = backward != null ? backward.result : new PassResult(from, from - 1);
-        return SpanFill.fill(startKey, endKey, f, b, from, to);
+        return SpanFill.fill(startKey, endKey, f, b, from, to, merge);
     }
 }

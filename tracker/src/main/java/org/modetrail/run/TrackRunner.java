@@ -24,23 +24,38 @@ import org.modetrail.video.VideoSource;
  * changed. Progress and cancellation are passed in, so the command line and the editor run the same code.
  */
 public final class TrackRunner {
+    /** The merge the simulated annotator's effort chose (DEVELOPERS.md, "Choosing how passes merge"). */
+    public static final PassMerge DEFAULT_MERGE = PassMerge.MORE_SIMILAR;
+    private static final long DEFAULT_BACKWARD_BUDGET = 256L << 20;
+
     private final TrackerConfig config;
+    private final PassMerge merge;
     private final long backwardBudgetBytes;
 
     /**
      * @param config              the tracker's settings
+     * @param merge               how frames that both passes of a segment found take their box
      * @param backwardBudgetBytes memory for the frames of one backward chunk; at least 8 frames are always held
      */
-    public TrackRunner(TrackerConfig config, long backwardBudgetBytes) {
+    public TrackRunner(TrackerConfig config, PassMerge merge, long backwardBudgetBytes) {
         if (backwardBudgetBytes <= 0) {
             throw new IllegalArgumentException("the backward budget must be positive");
         }
         this.config = config;
+        this.merge = java.util.Objects.requireNonNull(merge, "merge");
         this.backwardBudgetBytes = backwardBudgetBytes;
     }
 
+    public TrackRunner(TrackerConfig config, long backwardBudgetBytes) {
+        this(config, DEFAULT_MERGE, backwardBudgetBytes);
+    }
+
+    public TrackRunner(PassMerge merge) {
+        this(TrackerConfig.defaults(), merge, DEFAULT_BACKWARD_BUDGET);
+    }
+
     public TrackRunner() {
-        this(TrackerConfig.defaults(), 256L << 20);
+        this(DEFAULT_MERGE);
     }
 
     /** Tracks every track over the whole video. */
@@ -84,7 +99,7 @@ public final class TrackRunner {
         for (Segment s : segments) {
             Track t = result.track(s.trackId).orElseThrow();
             TrackFrames.Builder b = TrackFrames.clearNonKeyframes(t, s.from, s.to);
-            for (FrameAnnotation a : s.fill()) {
+            for (FrameAnnotation a : s.fill(merge)) {
                 if (t.at(a.frame()).map(FrameAnnotation::isKeyframe).orElse(false)) {
                     continue;
                 }
