@@ -184,10 +184,16 @@ public final class MeanShiftTracker implements Tracker {
         }
 
         if (bestRho >= acceptThreshold()) {
-            updateHolding(best, bestRho);
             typicalSimilarity += TYPICAL_RATE * (bestRho - typicalSimilarity);
             Box sized = adaptScale(best, bestRho);
-            best = holding ? noSmallerThan(sized, best) : sized;
+            // The halves are judged only when it matters: the box would shrink, or a hold may end.
+            if (holding || sized.width() < best.width() || sized.height() < best.height()) {
+                updateHolding(best, bestRho);
+                if (holding) {
+                    sized = noSmallerThan(sized, best);
+                }
+            }
+            best = sized;
             kalman.correct(best.centreX(), best.centreY());
             learn(frame, best);
             box = best;
