@@ -13,6 +13,8 @@ import java.util.List;
 import java.util.Map;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.io.TempDir;
 import org.modetrail.app.Main;
 import org.modetrail.format.project.ProjectFile;
@@ -103,6 +105,31 @@ class TrackCommandTest {
         assertEquals(2, r.code());
         assertTrue(r.err().contains("keys.csv, line 3"), r.err());
         assertFalse(Files.exists(out));
+    }
+
+    /** The bad inputs the command's interface names, each on line 3 of the file (the arena clip is 640x480, 450 frames). */
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', value = {
+        "malformed row      | 1,5,10,10,20",
+        "box outside frame  | 1,5,700,10,20,20",
+        "frame beyond end   | 1,450,10,10,20,20",
+        "duplicate pair     | 1,0,12,10,20,20"})
+    void everyBadKeyframeRowFailsWithTwoNamingItsLineAndLeavesAnEarlierOutputAlone(String what, String row)
+            throws Exception {
+        Path keyFile = Files.writeString(dir.resolve("keys.csv"),
+                "track_id,frame,x,y,width,height\n1,0,10,10,20,20\n" + row + "\n");
+        Path out = Files.writeString(dir.resolve("tracks.csv"), "an earlier result\n");
+        Path project = dir.resolve("p.json");
+        Run r = run("track", CLIP.toString(), "--keyframes", keyFile.toString(), "--out", out.toString(),
+                "--project", project.toString());
+        assertEquals(2, r.code(), what);
+        assertTrue(r.err().contains("keys.csv, line 3"), what + ": " + r.err());
+        assertEquals("an earlier result\n", Files.readString(out), what);
+        assertFalse(Files.exists(project), what);
+        try (var files = Files.list(dir)) {
+            assertEquals(List.of("keys.csv", "tracks.csv"), files.map(f -> f.getFileName().toString()).sorted()
+                    .toList(), what + ": nothing else is left in the folder");
+        }
     }
 
     @Test
