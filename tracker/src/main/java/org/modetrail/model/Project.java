@@ -7,14 +7,18 @@ import java.util.Optional;
 import java.util.Set;
 
 /**
- * What one annotation job holds: the video, the object classes and the tracks. Immutable; edits
- * ({@link Edits}) make new projects, so undo is keeping the old one ({@link History}).
+ * What one annotation job holds: the video, the object classes, the tracks, and what is known of the scene (ground
+ * calibration, zones, counting lines). Immutable; edits ({@link Edits}) make new projects, so undo is keeping the
+ * old one ({@link History}).
  */
-public record Project(VideoRef video, List<ObjectClass> classes, List<Track> tracks) {
+public record Project(VideoRef video, List<ObjectClass> classes, List<Track> tracks, Site site) {
 
     public Project {
         if (video == null) {
             throw new IllegalArgumentException("a project annotates a video");
+        }
+        if (site == null) {
+            site = Site.NONE;
         }
         classes = List.copyOf(classes);
         tracks = List.copyOf(tracks);
@@ -38,6 +42,11 @@ public record Project(VideoRef video, List<ObjectClass> classes, List<Track> tra
                         + " but the video has frames 0 to " + (video.frameCount() - 1));
             }
         }
+    }
+
+    /** A project with nothing known of the scene yet. */
+    public Project(VideoRef video, List<ObjectClass> classes, List<Track> tracks) {
+        this(video, classes, tracks, Site.NONE);
     }
 
     public static Project of(VideoRef video) {
@@ -77,7 +86,7 @@ public record Project(VideoRef video, List<ObjectClass> classes, List<Track> tra
         }
         List<ObjectClass> more = new ArrayList<>(classes);
         more.add(c);
-        return new Project(video, more, tracks);
+        return new Project(video, more, tracks, site);
     }
 
     /** This project with {@code t} replacing the track of the same id, or added if there is none. */
@@ -93,12 +102,21 @@ public record Project(VideoRef video, List<ObjectClass> classes, List<Track> tra
         if (!replaced) {
             list.add(t);
         }
-        return new Project(video, classes, list);
+        return new Project(video, classes, list, site);
+    }
+
+    public Project withSite(Site s) {
+        return new Project(video, classes, tracks, s);
+    }
+
+    /** The class {@code name}'s ground contact point, bottom centre for a class the project does not list. */
+    public ContactPoint contactPoint(String className) {
+        return objectClass(className).map(ObjectClass::contact).orElse(ContactPoint.BOTTOM_CENTRE);
     }
 
     public Project withoutTrack(int id) {
         List<Track> list = new ArrayList<>(tracks);
         list.removeIf(t -> t.id() == id);
-        return new Project(video, classes, list);
+        return new Project(video, classes, list, site);
     }
 }
