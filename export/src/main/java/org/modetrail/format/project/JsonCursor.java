@@ -83,6 +83,11 @@ final class JsonCursor {
         return parser.getText();
     }
 
+    /** The text of the current token (a string the caller has just checked for). */
+    String textOfCurrent() throws IOException {
+        return parser.getText();
+    }
+
     void skipValue() throws IOException {
         next();
         parser.skipChildren();

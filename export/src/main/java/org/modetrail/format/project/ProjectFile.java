@@ -21,7 +21,7 @@ import org.modetrail.model.Project;
  */
 public final class ProjectFile {
     /** The schema this version writes; it reads this one and every older one. */
-    public static final int CURRENT_SCHEMA = 1;
+    public static final int CURRENT_SCHEMA = 2;
 
     private ProjectFile() {
     }

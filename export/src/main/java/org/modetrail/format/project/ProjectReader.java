@@ -13,10 +13,12 @@ import java.util.Set;
 import java.util.TreeMap;
 import org.modetrail.model.Box;
 import org.modetrail.model.BoxSource;
+import org.modetrail.model.ContactPoint;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.ObjectClass;
 import org.modetrail.model.Presence;
 import org.modetrail.model.Project;
+import org.modetrail.model.Site;
 import org.modetrail.model.Track;
 import org.modetrail.model.VideoRef;
 
@@ -33,7 +35,7 @@ final class ProjectReader {
         JsonParser open() throws IOException;
     }
 
-    private static final Set<String> TOP_FIELDS = Set.of("format", "schema", "video", "classes", "tracks");
+    private static final Set<String> TOP_FIELDS = Set.of("format", "schema", "video", "classes", "site", "tracks");
 
     private final ParserSource source;
     private final java.nio.file.Path file;
@@ -88,6 +90,7 @@ final class ProjectReader {
             JsonCursor c = new JsonCursor(p, file);
             startRoot(c);
             List<Track> tracks = null;
+            Site site = Site.NONE;
             while (c.next() == JsonToken.FIELD_NAME) {
                 String name = c.fieldName();
                 if (!TOP_FIELDS.contains(name)) {
@@ -96,6 +99,8 @@ final class ProjectReader {
                 }
                 if (name.equals("tracks")) {
                     tracks = readTracks(c, header);
+                } else if (name.equals("site")) {
+                    site = SiteJson.read(c);
                 } else {
                     c.skipValue();
                 }
@@ -107,7 +112,7 @@ final class ProjectReader {
                 throw c.fail("there is more after the end of the project; remove it");
             }
             try {
-                return new Project(header.video, header.classes, tracks);
+                return new Project(header.video, header.classes, tracks, site);
             } catch (IllegalArgumentException e) {
                 throw new ProjectFileException(file, 0, 0, e.getMessage(), e);
             }
@@ -195,24 +200,41 @@ final class ProjectReader {
             }
             String name = null;
             Integer colour = null;
+            ContactPoint contact = ContactPoint.BOTTOM_CENTRE;
             while (c.next() == JsonToken.FIELD_NAME) {
                 switch (c.fieldName()) {
                     case "name" -> name = c.readString("a class's \"name\"");
                     case "colour" -> colour = colour(c, c.readString("a class's \"colour\""));
+                    case "contact" -> contact = contact(c);
                     default -> throw c.fail("unknown field \"" + c.fieldName()
-                            + "\" in a class; a class has name and colour");
+                            + "\" in a class; a class has name, colour and contact");
                 }
             }
             if (name == null || name.isBlank() || colour == null) {
                 throw c.failAt(at, "a class needs a \"name\" and a \"colour\"");
             }
-            ObjectClass k = new ObjectClass(name, colour);
+            ObjectClass k = new ObjectClass(name, colour, contact);
             if (!names.add(k.name())) {
                 throw c.failAt(at, "class \"" + k.name() + "\" is listed twice; remove one");
             }
             classes.add(k);
         }
         return classes;
+    }
+
+    private static ContactPoint contact(JsonCursor c) throws IOException {
+        c.expect(JsonToken.START_ARRAY, "a class's \"contact\" ([fraction of width, fraction of height])");
+        JsonLocation at = c.location();
+        double w = c.readDouble("a class's contact: fraction of the width");
+        double h = c.readDouble("a class's contact: fraction of the height");
+        if (c.next() != JsonToken.END_ARRAY) {
+            throw c.fail("a class's \"contact\" has 2 numbers, like [0.5, 1] for the bottom centre");
+        }
+        try {
+            return new ContactPoint(w, h);
+        } catch (IllegalArgumentException e) {
+            throw c.failAt(at, e.getMessage() + ", like [0.5, 1] for the bottom centre");
+        }
     }
 
     private static int colour(JsonCursor c, String text) throws IOException {

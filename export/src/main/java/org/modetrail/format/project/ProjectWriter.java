@@ -35,9 +35,14 @@ final class ProjectWriter {
                 g.writeStartObject();
                 g.writeStringField("name", c.name());
                 g.writeStringField("colour", String.format(java.util.Locale.ROOT, "#%06X", c.colour()));
+                g.writeArrayFieldStart("contact");
+                number(g, c.contact().alongWidth());
+                number(g, c.contact().alongHeight());
+                g.writeEndArray();
                 g.writeEndObject();
             }
             g.writeEndArray();
+            SiteJson.write(g, project.site(), ProjectWriter::number);
             g.writeArrayFieldStart("tracks");
             for (Track t : project.tracks()) {
                 writeTrack(g, t);

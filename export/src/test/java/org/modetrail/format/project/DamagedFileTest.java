@@ -21,7 +21,7 @@ class DamagedFileTest {
     static final String VALID = String.join("\n",
             "{",
             "  \"format\": \"modetrail-project\",",
-            "  \"schema\": 1,",
+            "  \"schema\": 2,",
             "  \"video\": {\"path\": \"a.mp4\", \"width\": 64, \"height\": 48, \"frames\": 10, \"fingerprint\": \"\"},",
             "  \"classes\": [",
             "    {\"name\": \"ant\", \"colour\": \"#00FF00\"}",
@@ -151,7 +151,7 @@ class DamagedFileTest {
         assertTrue(field.getMessage().contains("unknown field \"notes\" in track 1"), field.getMessage());
         ProjectFileException trailing = failsOn(VALID + "{}");
         assertTrue(trailing.getMessage().contains("more after the end"), trailing.getMessage());
-        ProjectFileException missing = failsOn(VALID.replace("\"schema\": 1,", ""));
+        ProjectFileException missing = failsOn(VALID.replace("\"schema\": 2,", ""));
         assertTrue(missing.getMessage().contains("no \"schema\" field"), missing.getMessage());
     }
 

@@ -17,7 +17,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** Files made to hurt the reader: each must be refused quickly, with a message, and without running out of heap. */
 class HostileFileTest {
-    private static final String HEAD = "{\"format\": \"modetrail-project\", \"schema\": 1,\n";
+    private static final String HEAD = "{\"format\": \"modetrail-project\", \"schema\": 2,\n";
 
     @TempDir
     Path dir;

@@ -54,7 +54,7 @@ class SchemaVersionTest {
         Files.writeString(file, SCHEMA_0);
         Project p = ProjectFile.read(file);
         ProjectFile.write(p, file);
-        assertTrue(Files.readString(file).contains("\"schema\": 1,"));
+        assertTrue(Files.readString(file).contains("\"schema\": 2,"));
         assertEquals(SCHEMA_0, Files.readString(ProjectFile.backupFile(file)), "the old file is kept as .bak");
         assertEquals(p, ProjectFile.read(file));
     }
@@ -73,7 +73,7 @@ class SchemaVersionTest {
         Path file = dir.resolve("new.json");
         Files.writeString(file, "{\"format\": \"modetrail-project\", \"schema\": 7, \"video\": {\"new\": true}}");
         ProjectFileException e = assertThrows(ProjectFileException.class, () -> ProjectFile.read(file));
-        assertEquals(file + ": written by a newer Modetrail (schema 7); this version reads schema 1 and older: "
+        assertEquals(file + ": written by a newer Modetrail (schema 7); this version reads schema 2 and older: "
                 + "update Modetrail", e.getMessage());
     }
 
