@@ -24,4 +24,9 @@ public record TrackSummary(int trackId, String className, int firstFrame, int la
         secondsInZone = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(secondsInZone));
         crossings = List.copyOf(crossings);
     }
+
+    /** How many times the track crossed counting line {@code line} in direction {@code d}. */
+    public long crossingCount(String line, CrossingDirection d) {
+        return crossings.stream().filter(c -> c.line().equals(line) && c.direction() == d).count();
+    }
 }
