@@ -1,0 +1,151 @@
+package org.modetrail.format.csv;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.modetrail.model.GroundPoint;
+import org.modetrail.model.PixelPoint;
+import org.modetrail.model.WorldPoint;
+
+/**
+ * Reads a calibration points file: header {@code image_x,image_y,world_x_m,world_y_m} (in any order; other columns
+ * are refused so a typo does not pass unnoticed), one point pair per row: where the point is in the image, in pixels
+ * from the top-left corner of the frame, and where it is on the ground, in metres (decimals with a dot). Points come
+ * back in file order, so point k of the fit's report is data row k. Every problem names its line.
+ */
+public final class CalibrationPointsCsv {
+    public static final List<String> COLUMNS = List.of("image_x", "image_y", "world_x_m", "world_y_m");
+    private static final int MAX_ROWS = 100_000;
+
+    private CalibrationPointsCsv() {
+    }
+
+    /** The file's points, without checking them against a frame size. */
+    public static List<GroundPoint> read(Path file) throws IOException {
+        return read(file, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * @param width  the video's frame width in pixels, to refuse image points outside the frame
+     * @param height the video's frame height
+     */
+    public static List<GroundPoint> read(Path file, double width, double height) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            throw new CsvFormatException(file, 0, "no such file; check the path given to --points");
+        }
+        List<GroundPoint> points = new ArrayList<>();
+        List<Integer> lines = new ArrayList<>();
+        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            String header = in.readLine();
+            if (header == null || header.isBlank()) {
+                throw new CsvFormatException(file, 1, "the file is empty; it needs the header "
+                        + String.join(",", COLUMNS));
+            }
+            Map<String, Integer> columns = columns(file, header.replace("\uFEFF", ""));
+            String text;
+            int line = 1;
+            while ((text = in.readLine()) != null) {
+                line++;
+                if (text.isBlank()) {
+                    continue;
+                }
+                if (points.size() >= MAX_ROWS) {
+                    throw new CsvFormatException(file, line, "more than " + MAX_ROWS + " points");
+                }
+                GroundPoint p = parse(file, line, text, columns, width, height);
+                for (int k = 0; k < points.size(); k++) {
+                    GroundPoint q = points.get(k);
+                    if (q.image().equals(p.image())) {
+                        throw new CsvFormatException(file, line, "the image point " + p.image().x() + ","
+                                + p.image().y() + " is already on line " + lines.get(k) + "; each point must be a"
+                                + " different place: remove one or correct it");
+                    }
+                    if (q.world().equals(p.world())) {
+                        throw new CsvFormatException(file, line, "the ground point " + p.world().x() + ","
+                                + p.world().y() + " is already on line " + lines.get(k) + "; each point must be a"
+                                + " different place: remove one or correct it");
+                    }
+                }
+                points.add(p);
+                lines.add(line);
+            }
+            if (points.size() < 4) {
+                throw new CsvFormatException(file, line + 1, "only " + points.size() + " point(s); a ground"
+                        + " calibration needs at least 4 rows under the header, spread over the ground");
+            }
+        }
+        return points;
+    }
+
+    private static Map<String, Integer> columns(Path file, String header) throws CsvFormatException {
+        Map<String, Integer> columns = new HashMap<>();
+        List<String> names;
+        try {
+            names = CsvLine.split(header);
+        } catch (IllegalArgumentException e) {
+            throw new CsvFormatException(file, 1, e.getMessage());
+        }
+        for (int i = 0; i < names.size(); i++) {
+            String name = names.get(i).toLowerCase(Locale.ROOT);
+            if (!COLUMNS.contains(name)) {
+                throw new CsvFormatException(file, 1, "unknown column '" + names.get(i) + "'; the columns are "
+                        + String.join(",", COLUMNS));
+            }
+            if (columns.put(name, i) != null) {
+                throw new CsvFormatException(file, 1, "column '" + name + "' appears twice");
+            }
+        }
+        for (String r : COLUMNS) {
+            if (!columns.containsKey(r)) {
+                throw new CsvFormatException(file, 1, "the header lacks column '" + r + "'; it needs "
+                        + String.join(",", COLUMNS));
+            }
+        }
+        return columns;
+    }
+
+    private static GroundPoint parse(Path file, int line, String text, Map<String, Integer> columns, double width,
+                                     double height) throws CsvFormatException {
+        List<String> f;
+        try {
+            f = CsvLine.split(text);
+        } catch (IllegalArgumentException e) {
+            throw new CsvFormatException(file, line, e.getMessage());
+        }
+        if (f.size() != columns.size()) {
+            throw new CsvFormatException(file, line, "has " + f.size() + " fields, the header " + columns.size());
+        }
+        double u = number(file, line, f, columns, "image_x");
+        double v = number(file, line, f, columns, "image_y");
+        double x = number(file, line, f, columns, "world_x_m");
+        double y = number(file, line, f, columns, "world_y_m");
+        if (u < 0 || v < 0 || u > width || v > height) {
+            throw new CsvFormatException(file, line, "the image point " + u + "," + v + " lies outside the "
+                    + (int) width + "x" + (int) height + " frame");
+        }
+        return new GroundPoint(new PixelPoint(u, v), new WorldPoint(x, y));
+    }
+
+    private static double number(Path file, int line, List<String> f, Map<String, Integer> c, String name)
+            throws CsvFormatException {
+        String s = f.get(c.get(name));
+        try {
+            double v = Double.parseDouble(s);
+            if (!Double.isFinite(v) || s.contains(",")) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new CsvFormatException(file, line, name + " must be a number with a dot for decimals, got '" + s
+                    + "'");
+        }
+    }
+}
