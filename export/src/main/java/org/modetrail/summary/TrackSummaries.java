@@ -17,7 +17,8 @@ import org.modetrail.model.Zone;
  * Per-track summaries of a project: duration, path length, speeds from the ground paths, time in each zone and
  * counting-line crossings with direction. Positions are each class's ground contact point on the box. Zones and
  * lines are judged in the image, so they work without a calibration; a frame counts towards a zone for its own
- * duration (the time to the next frame).
+ * duration (the time to the next frame). Paths and crossings run between consecutive frames that both have a box:
+ * across a hidden span or frames without a box nothing is inferred.
  */
 public final class TrackSummaries {
     private TrackSummaries() {
@@ -55,15 +56,20 @@ public final class TrackSummaries {
         // Per line: the side of the last point that was not on it, and that point.
         double[] lastSide = new double[lines.size()];
         PixelPoint[] lastOffLine = new PixelPoint[lines.size()];
+        int previousFrame = -2;
         for (FrameAnnotation a : t.frames().values()) {
             Box b = a.box();
-            if (b == null) {
-                // A hidden or absent mark breaks the path: no crossing is inferred across it.
+            int f = a.frame();
+            if (b == null || f != previousFrame + 1) {
+                // A hidden or absent mark, or frames without any box, break the path: neither distance nor a
+                // crossing is inferred across the gap.
                 previous = null;
                 java.util.Arrays.fill(lastSide, 0);
+            }
+            previousFrame = f;
+            if (b == null) {
                 continue;
             }
-            int f = a.frame();
             PixelPoint p = contact.on(b);
             if (first < 0) {
                 first = f;
@@ -107,7 +113,9 @@ public final class TrackSummaries {
         if (path != null && path.frames().length > 0) {
             pathM = 0;
             for (int i = 1; i < path.frames().length; i++) {
-                pathM += Math.hypot(path.xM()[i] - path.xM()[i - 1], path.yM()[i] - path.yM()[i - 1]);
+                if (path.frames()[i] == path.frames()[i - 1] + 1) {
+                    pathM += Math.hypot(path.xM()[i] - path.xM()[i - 1], path.yM()[i] - path.yM()[i - 1]);
+                }
             }
             double sum = 0;
             int n = 0;

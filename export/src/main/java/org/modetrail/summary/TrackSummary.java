@@ -10,7 +10,7 @@ import java.util.Map;
  * @param boxedFrames       frames with a box (keyframe, tracked or interpolated)
  * @param durationS         from the first boxed frame's time to the end of the last one (one frame's duration added)
  * @param pathLengthPx      along the ground contact point in the image, between consecutive boxed frames
- * @param pathLengthM       along the smoothed ground path, NaN without a calibration
+ * @param pathLengthM       along the smoothed ground path between consecutive frames, NaN without a calibration
  * @param meanSpeedMs       mean of the smoothed speeds, NaN without a calibration
  * @param peakSpeedMs       the largest smoothed speed, NaN without a calibration
  * @param peakSpeedSigmaMs  the standard uncertainty of that peak speed

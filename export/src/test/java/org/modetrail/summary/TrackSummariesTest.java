@@ -75,11 +75,11 @@ class TrackSummariesTest {
 
     @Test
     void aGroundPathGivesLengthAndSpeeds() {
-        int[] frames = {0, 1, 2, 3};
-        GroundPath p = new GroundPath(1, frames, new double[] {0, 3, 6, 10}, new double[] {0, 4, 8, 8},
-                new double[] {Double.NaN, 50, 40, Double.NaN}, new double[] {0, 0.5, 0.4, 0});
+        int[] frames = {0, 1, 2, 3, 90};
+        GroundPath p = new GroundPath(1, frames, new double[] {0, 3, 6, 10, 50}, new double[] {0, 4, 8, 8, 8},
+                new double[] {Double.NaN, 50, 40, Double.NaN, Double.NaN}, new double[] {0, 0.5, 0.4, 0, 0});
         TrackSummary s = TrackSummaries.of(project(Site.NONE), times(), Map.of(1, p)).get(0);
-        assertEquals(14, s.pathLengthM(), 1e-12, "5 + 5 + 4 m");
+        assertEquals(14, s.pathLengthM(), 1e-12, "5 + 5 + 4 m; nothing across the gap to frame 90");
         assertEquals(45, s.meanSpeedMs(), 1e-12);
         assertEquals(50, s.peakSpeedMs(), 1e-12);
         assertEquals(0.5, s.peakSpeedSigmaMs(), 1e-12);

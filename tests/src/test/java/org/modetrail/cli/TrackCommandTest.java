@@ -113,7 +113,8 @@ class TrackCommandTest {
         "malformed row      | 1,5,10,10,20",
         "box outside frame  | 1,5,700,10,20,20",
         "frame beyond end   | 1,450,10,10,20,20",
-        "duplicate pair     | 1,0,12,10,20,20"})
+        "duplicate pair     | 1,0,12,10,20,20",
+        "box too small      | 1,5,10,10,3,1"})
     void everyBadKeyframeRowFailsWithTwoNamingItsLineAndLeavesAnEarlierOutputAlone(String what, String row)
             throws Exception {
         Path keyFile = Files.writeString(dir.resolve("keys.csv"),

@@ -91,8 +91,13 @@ public final class SummaryCommand implements Callable<Integer> {
             w.printf(Locale.ROOT, "track %d (%s): frames %d-%d, %.2f s, path %.1f px", s.trackId(), s.className(),
                     s.firstFrame(), s.lastFrame(), s.durationS(), s.pathLengthPx());
             if (metres && Double.isFinite(s.pathLengthM())) {
-                w.printf(Locale.ROOT, " = %.2f m, mean speed %.2f m/s, peak %.2f ± %.2f m/s", s.pathLengthM(),
-                        s.meanSpeedMs(), s.peakSpeedMs(), s.peakSpeedSigmaMs());
+                w.printf(Locale.ROOT, " = %.2f m", s.pathLengthM());
+                if (Double.isFinite(s.peakSpeedMs())) {
+                    w.printf(Locale.ROOT, ", mean speed %.2f m/s, peak %.2f ± %.2f m/s", s.meanSpeedMs(),
+                            s.peakSpeedMs(), s.peakSpeedSigmaMs());
+                } else {
+                    w.print(", too short for a speed");
+                }
             }
             w.println();
             for (Zone z : site.zones()) {

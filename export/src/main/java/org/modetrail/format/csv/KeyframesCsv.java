@@ -21,6 +21,9 @@ import org.modetrail.model.Box;
  * 0-based, the box's top-left corner and size in pixels (decimals with a dot). Every problem names its line.
  */
 public final class KeyframesCsv {
+    /** The smallest box side the tracker can start from, in pixels. */
+    public static final double MIN_SIDE_PX = 2;
+
     private static final List<String> REQUIRED = List.of("track_id", "frame", "x", "y", "width", "height");
     private static final int MAX_ROWS = 10_000_000;
 
@@ -118,6 +121,11 @@ public final class KeyframesCsv {
         }
         if (!(w > 0) || !(h > 0)) {
             throw new CsvFormatException(file, line, "the box needs a positive width and height, got " + w + "x" + h);
+        }
+        if (w < MIN_SIDE_PX || h < MIN_SIDE_PX) {
+            throw new CsvFormatException(file, line, "the box " + w + "x" + h + " is too small to track; a keyframe "
+                    + "box needs at least " + (int) MIN_SIDE_PX + " x " + (int) MIN_SIDE_PX + " pixels (draw it where more of the "
+                    + "object is in view)");
         }
         if (x < 0 || y < 0 || x + w > width || y + h > height) {
             throw new CsvFormatException(file, line, "the box " + x + "," + y + " " + w + "x" + h + " reaches outside"

@@ -51,6 +51,7 @@ class KeyframesCsvTest {
         assertTrue(refused(h + "1,0,1;5,1,2,2\n").getMessage().contains("a number with a dot"));
         assertTrue(refused(h + "0,0,1,1,2,2\n").getMessage().contains("track_id must be 1 or more"));
         assertTrue(refused(h + "1,0,1,1,0,2\n").getMessage().contains("positive width"));
+        assertTrue(refused(h + "1,0,1,1,3,1\n").getMessage().contains("too small to track"));
         assertTrue(refused("track_id,frame,x,y,w,height\n").getMessage().contains("unknown column 'w'"));
         assertTrue(refused("track_id,frame,x,y,width\n").getMessage().contains("lacks column 'height'"));
         assertTrue(refused(h).getMessage().contains("no keyframes"));
