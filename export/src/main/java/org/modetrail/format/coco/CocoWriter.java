@@ -101,7 +101,8 @@ public final class CocoWriter {
                     dropped++;
                     continue;
                 }
-                if (!box.equals(a.box())) {
+                Box b = a.box();
+                if (b.x() < 0 || b.y() < 0 || b.right() > video.width() || b.bottom() > video.height()) {
                     clipped++;
                 }
                 byFrame.computeIfAbsent(a.frame(), f -> new ArrayList<>()).add(new Entry(t, a, box));
