@@ -227,25 +227,28 @@ public final class CocoWriter {
         return new CocoSummary(byFrame.size(), annotations[0], clipped, dropped, imageFiles);
     }
 
-    /** The box clipped to the frame and rounded to a thousandth of a pixel, or null when nothing is left. */
+    /**
+     * The box clipped to the frame, then x, y, width and height each rounded to a thousandth of a pixel (as the
+     * CSV and MOT files print them), or null when nothing is left.
+     */
     static Box clip(Box b, int width, int height) {
-        double x0 = round(Math.max(0, b.x()), 1e3);
-        double y0 = round(Math.max(0, b.y()), 1e3);
-        double x1 = round(Math.min(width, b.right()), 1e3);
-        double y1 = round(Math.min(height, b.bottom()), 1e3);
-        double w = round(x1 - x0, 1e3);
-        double h = round(y1 - y0, 1e3);
+        double x0 = Math.max(0, b.x());
+        double y0 = Math.max(0, b.y());
+        double x = round(x0, 1e3);
+        double y = round(y0, 1e3);
+        double w = round(Math.min(width, b.right()) - x0, 1e3);
+        double h = round(Math.min(height, b.bottom()) - y0, 1e3);
+        // Rounding can carry the far edge a last digit past the frame; never let the box end outside it.
+        while (w > 0 && x + w > width) {
+            w = Math.nextDown(Math.min(w, width - x));
+        }
+        while (h > 0 && y + h > height) {
+            h = Math.nextDown(Math.min(h, height - y));
+        }
         if (!(w > 0) || !(h > 0)) {
             return null;
         }
-        // Rounding the size can add a last-digit error; never let the box end past the frame.
-        if (x0 + w > width) {
-            w = Math.nextDown(width - x0);
-        }
-        if (y0 + h > height) {
-            h = Math.nextDown(height - y0);
-        }
-        return new Box(x0, y0, w, h);
+        return new Box(x, y, w, h);
     }
 
     private static double round(double v, double scale) {
