@@ -88,17 +88,35 @@ public final class CocoReader {
         try (InputStream in = Files.newInputStream(file); JsonParser p = factory.createParser(in)) {
             Cursor c = new Cursor(p, file, limits);
             try {
-                c.document(parsed);
+                c.document(parsed, null);
             } catch (JsonProcessingException e) {
                 throw c.translate(e);
             }
         }
-        return assemble(file, video, limits, parsed);
+        Header header = header(file, video, limits, parsed);
+        // Second pass: the annotations go straight into the tracks, so they are never held twice.
+        try (InputStream in = Files.newInputStream(file); JsonParser p = factory.createParser(in)) {
+            Cursor c = new Cursor(p, file, limits);
+            try {
+                c.document(new Parsed(), a -> annotation(file, header, a));
+            } catch (JsonProcessingException e) {
+                throw c.translate(e);
+            }
+        }
+        return header.tracks.build(header.classes);
+    }
+
+    /** What the annotations are checked against: the images' frames, the categories, the tracks so far. */
+    private record Header(TrackAssembler tracks, Map<Integer, Integer> frameOfImage,
+                          Map<Integer, Category> categories, List<ObjectClass> classes) {
+    }
+
+    private interface AnnotationSink {
+        void accept(Annotation a) throws IOException;
     }
 
     private static final class Parsed {
         final List<Image> images = new ArrayList<>();
-        final List<Annotation> annotations = new ArrayList<>();
         final List<Category> categories = new ArrayList<>();
         final List<TrackEntry> tracks = new ArrayList<>();
         final List<VideoEntry> videos = new ArrayList<>();
@@ -107,7 +125,7 @@ public final class CocoReader {
         boolean hasCategories;
     }
 
-    private static Project assemble(Path file, VideoRef video, ImportLimits limits, Parsed d) throws IOException {
+    private static Header header(Path file, VideoRef video, ImportLimits limits, Parsed d) throws IOException {
         Place top = new Place(0, 0, "");
         if (!d.hasImages || !d.hasAnnotations || !d.hasCategories) {
             throw top.error(file, "a COCO file needs the lists \"images\", \"annotations\" and \"categories\";"
@@ -180,46 +198,6 @@ public final class CocoReader {
             }
             tracks.declare(t.id, k.name, t.at);
         }
-        for (Annotation a : d.annotations) {
-            if (a.imageId == null || a.categoryId == null || a.bbox == null) {
-                throw a.at.error(file, "the annotation lacks " + (a.imageId == null ? "\"image_id\""
-                        : a.categoryId == null ? "\"category_id\"" : "\"bbox\"") + "; every COCO annotation has"
-                        + " image_id, category_id and bbox");
-            }
-            if (a.trackId == null) {
-                throw a.at.error(file, "the annotation has no \"track_id\"; Modetrail imports tracks, so each box"
-                        + " must say which object it belongs to");
-            }
-            Integer frame = frameOfImage.get(a.imageId);
-            if (frame == null) {
-                throw a.at.error(file, "image_id " + a.imageId + " is not in \"images\"; add the image or correct"
-                        + " the id");
-            }
-            Category k = categories.get(a.categoryId);
-            if (k == null) {
-                throw a.at.error(file, "category_id " + a.categoryId + " is not in \"categories\"; add the"
-                        + " category or correct the id");
-            }
-            if (a.iscrowd != 0) {
-                throw a.at.error(file, "iscrowd is " + a.iscrowd + "; a crowd region is not one object, so"
-                        + " remove it or set iscrowd to 0");
-            }
-            BoxSource source = BoxSource.KEYFRAME;
-            if (a.source != null) {
-                try {
-                    source = BoxSource.valueOf(a.source.toUpperCase(Locale.ROOT));
-                } catch (IllegalArgumentException e) {
-                    throw a.sourceAt.error(file, CocoWriter.SOURCE_KEY + " must be keyframe, tracked or"
-                            + " interpolated, got \"" + a.source + "\"");
-                }
-            }
-            double score = a.score != null ? a.score : source == BoxSource.KEYFRAME ? 1 : 0;
-            if (!(score >= 0 && score <= 1)) {
-                throw a.at.error(file, "score must be between 0 and 1, got " + score);
-            }
-            Box box = tracks.checkedBox(a.bbox[0], a.bbox[1], a.bbox[2], a.bbox[3], a.bboxAt);
-            tracks.add(a.trackId, k.name, new FrameAnnotation(frame, Presence.VISIBLE, box, source, score), a.at);
-        }
         List<Category> sorted = new ArrayList<>(d.categories);
         sorted.sort(java.util.Comparator.comparingInt(Category::id));
         List<ObjectClass> classes = new ArrayList<>();
@@ -227,7 +205,49 @@ public final class CocoReader {
             int colour = k.colour != null ? k.colour : TrackAssembler.paletteColour(classes.size());
             classes.add(new ObjectClass(k.name, colour));
         }
-        return tracks.build(classes);
+        return new Header(tracks, frameOfImage, categories, classes);
+    }
+
+    private static void annotation(Path file, Header header, Annotation a) throws IOException {
+        TrackAssembler tracks = header.tracks;
+        if (a.imageId == null || a.categoryId == null || a.bbox == null) {
+            throw a.at.error(file, "the annotation lacks " + (a.imageId == null ? "\"image_id\""
+                    : a.categoryId == null ? "\"category_id\"" : "\"bbox\"") + "; every COCO annotation has"
+                    + " image_id, category_id and bbox");
+        }
+        if (a.trackId == null) {
+            throw a.at.error(file, "the annotation has no \"track_id\"; Modetrail imports tracks, so each box"
+                    + " must say which object it belongs to");
+        }
+        Integer frame = header.frameOfImage.get(a.imageId);
+        if (frame == null) {
+            throw a.at.error(file, "image_id " + a.imageId + " is not in \"images\"; add the image or correct"
+                    + " the id");
+        }
+        Category k = header.categories.get(a.categoryId);
+        if (k == null) {
+            throw a.at.error(file, "category_id " + a.categoryId + " is not in \"categories\"; add the"
+                    + " category or correct the id");
+        }
+        if (a.iscrowd != 0) {
+            throw a.at.error(file, "iscrowd is " + a.iscrowd + "; a crowd region is not one object, so"
+                    + " remove it or set iscrowd to 0");
+        }
+        BoxSource source = BoxSource.KEYFRAME;
+        if (a.source != null) {
+            try {
+                source = BoxSource.valueOf(a.source.toUpperCase(Locale.ROOT));
+            } catch (IllegalArgumentException e) {
+                throw a.sourceAt.error(file, CocoWriter.SOURCE_KEY + " must be keyframe, tracked or"
+                        + " interpolated, got \"" + a.source + "\"");
+            }
+        }
+        double score = a.score != null ? a.score : source == BoxSource.KEYFRAME ? 1 : 0;
+        if (!(score >= 0 && score <= 1)) {
+            throw a.at.error(file, "score must be between 0 and 1, got " + score);
+        }
+        Box box = tracks.checkedBox(a.bbox[0], a.bbox[1], a.bbox[2], a.bbox[3], a.bboxAt);
+        tracks.add(a.trackId, k.name, new FrameAnnotation(frame, Presence.VISIBLE, box, source, score), a.at);
     }
 
     /** The streaming parser with typed reads that fail at the offending value. */
@@ -285,12 +305,18 @@ public final class CocoReader {
             return t;
         }
 
-        void document(Parsed d) throws IOException {
+        /** Reads the document; annotations go to {@code annotations}, or are skipped when it is null. */
+        void document(Parsed d, AnnotationSink annotations) throws IOException {
             if (next() != JsonToken.START_OBJECT) {
                 throw fail("a COCO file is a JSON object starting with '{'");
             }
             while (next() == JsonToken.FIELD_NAME) {
                 String name = p.currentName();
+                if (annotations != null && !name.equals("annotations")) {
+                    next(); // the first pass has read it
+                    p.skipChildren();
+                    continue;
+                }
                 switch (name) {
                     case "images" -> {
                         d.hasImages = true;
@@ -298,7 +324,12 @@ public final class CocoReader {
                     }
                     case "annotations" -> {
                         d.hasAnnotations = true;
-                        list(() -> add(d.annotations, annotation(), "annotations"));
+                        if (annotations == null) {
+                            next();
+                            p.skipChildren();
+                        } else {
+                            list(() -> annotations.accept(annotation()));
+                        }
                     }
                     case "categories" -> {
                         d.hasCategories = true;

@@ -179,6 +179,6 @@ class CocoReaderTest {
         }
         e = refused(write(ann(GOOD + many)), ImportLimits.DEFAULT.withMaxBoxes(3));
         assertEquals(12, e.line());
-        assertTrue(e.getMessage().contains("more than 3 annotations"), e.getMessage());
+        assertTrue(e.getMessage().contains("more than 3 boxes"), e.getMessage());
     }
 }
