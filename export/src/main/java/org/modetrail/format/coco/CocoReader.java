@@ -38,7 +38,9 @@ import org.modetrail.model.VideoRef;
  * {@value CocoWriter#COLOUR_KEY} or the palette), in id order. Keys the reader does not use are skipped.
  *
  * <p>Read with Jackson's streaming parser only (no data binding to classes), under the stream limits of
- * {@link ImportLimits}. Every problem names the file, the line and column, and the JSON Pointer of the value.
+ * {@link ImportLimits}, in two passes: the first reads images, categories, tracks and videos and skips the
+ * annotations, the second streams the annotations into the tracks, so keys may come in any order and no
+ * annotation is held twice. Every problem names the file, the line and column, and the JSON Pointer of the value.
  */
 public final class CocoReader {
     private CocoReader() {

@@ -122,6 +122,15 @@ class CocoReaderTest {
         assertEquals("/annotations/1/track_id", e.jsonPath());
         assertTrue(e.getMessage().contains("\"track_id\" must be a whole number"), e.getMessage());
 
+        e = refused(ann(GOOD.replace("\"track_id\": 7", "\"track_id\": 7, \"modetrail_source\": \"guessed\"")));
+        assertEquals(10, e.line());
+        assertEquals("/annotations/1/modetrail_source", e.jsonPath());
+        assertTrue(e.getMessage().contains("must be keyframe, tracked or interpolated"), e.getMessage());
+
+        e = refused(ann(GOOD.replace("\"track_id\": 7", "\"track_id\": 7, \"score\": 1.5")));
+        assertEquals(10, e.line());
+        assertTrue(e.getMessage().contains("score must be between 0 and 1"), e.getMessage());
+
         e = refused(ann(GOOD.replace(", \"track_id\": 7", "")));
         assertTrue(e.getMessage().contains("no \"track_id\""), e.getMessage());
     }
