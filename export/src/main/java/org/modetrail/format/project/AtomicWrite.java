@@ -24,12 +24,12 @@ import java.util.regex.Pattern;
  * the rename stays on one file system), is forced to the disk, and is renamed over the target. The old version
  * can be kept as NAME.bak, made the same way so that it too is never partial.
  */
-final class AtomicWrite {
+public final class AtomicWrite {
     /** A temporary file untouched this long belongs to a write that was killed. */
     static final Duration LEFTOVER_AGE = Duration.ofMinutes(2);
 
     /** Something that writes bytes. */
-    interface Content {
+    public interface Content {
         void writeTo(OutputStream out) throws IOException;
     }
 
@@ -38,6 +38,11 @@ final class AtomicWrite {
 
     static Path backupOf(Path target) {
         return target.resolveSibling(target.getFileName() + ".bak");
+    }
+
+    /** Replaces {@code target} with what {@code content} writes, keeping no backup. */
+    public static void replace(Path target, Content content) throws IOException {
+        replace(target, false, content, UnaryOperator.identity());
     }
 
     /**
