@@ -235,6 +235,13 @@ public final class HomographyFit {
                     + " ground plane within " + fmt(config.thresholdPx()) + " px, and a fit needs 4; check the points"
                     + " (image and ground positions swapped, wrong units, typing errors) or raise the threshold");
         }
+        if (!(inliers > config.minInlierShare() * n)) {
+            throw new IllegalArgumentException("only " + inliers + " of the " + n + " calibration points agree on one"
+                    + " ground plane within " + fmt(config.thresholdPx()) + " px, not more than "
+                    + Math.round(100 * config.minInlierShare()) + " %; the points as a whole look wrong: check that"
+                    + " image and ground columns are not swapped, that ground positions are in metres and all from"
+                    + " one plan, and that the image points are from this video");
+        }
     }
 
     private static List<String> warnings(CalibrationConfig c, double[] errPx, boolean[] inlier, int inliers,
