@@ -16,9 +16,16 @@ import org.junit.jupiter.api.Test;
 import org.modetrail.model.Box;
 import org.modetrail.model.ContactPoint;
 import org.modetrail.model.FrameAnnotation;
+import org.modetrail.model.GroundCalibration;
 import org.modetrail.model.Homography;
+import org.modetrail.model.ObjectClass;
+import org.modetrail.model.PixelPoint;
 import org.modetrail.model.Presence;
+import org.modetrail.model.Project;
+import org.modetrail.model.Site;
 import org.modetrail.model.Track;
+import org.modetrail.model.VideoRef;
+import org.modetrail.model.WorldPoint;
 
 /**
  * Ground paths of objects whose ground motion is known in closed form, seen through a known homography: the box's
@@ -112,6 +119,40 @@ class GroundTrajectoryTest {
                 assertEquals(10, s.speedMs(), 1e-6, "frame " + s.frame());
             }
         }
+    }
+
+    @Test
+    void aProjectGivesTheCalibrationAndTheClassContactPoint() {
+        GroundCalibration cal = HomographyFit.fit(Scenes.road(20, 0.3, 1));
+        // A frame whose contact point is above the horizon (v about 8 px here) is not on the ground: left out.
+        Track t = track(30, FPS25, s -> 5.25, s -> 20 + 8 * s, 0, null)
+                .with(FrameAnnotation.tracked(30, new Box(480, 0, 10, 2), 0.5));
+        VideoRef video = new VideoRef("road.mp4", 960, 540, 100, "");
+        Project p = new Project(video, List.of(new ObjectClass("car", 0xff0000, ContactPoint.CENTRE)), List.of(t),
+                new Site(cal, List.of(), List.of()));
+        List<GroundSample> g = GroundTrajectory.of(p, t, FPS25, TrajectoryConfig.defaults());
+        assertEquals(30, g.size(), "frame 30 lies beyond the horizon");
+        Box b = t.at(10).orElseThrow().box();
+        assertEquals(cal.imageToWorld().toWorld(new PixelPoint(b.centreX(), b.centreY())), g.get(10).raw(),
+                "the class's contact point, the box centre");
+        assertEquals(90, g.get(10).headingDeg(), 1, "moving along +y");
+        // Position sigma: the calibration's RMS image error through the map's Jacobian, here by central differences
+        // of the map itself (step 0.01 px), sigma = rms * sqrt((|dX/du|^2 + |dX/dv|^2) / 2).
+        double u = b.centreX();
+        double v = b.centreY();
+        double step = 0.01;
+        WorldPoint du1 = cal.imageToWorld().toWorld(new PixelPoint(u + step, v));
+        WorldPoint du0 = cal.imageToWorld().toWorld(new PixelPoint(u - step, v));
+        WorldPoint dv1 = cal.imageToWorld().toWorld(new PixelPoint(u, v + step));
+        WorldPoint dv0 = cal.imageToWorld().toWorld(new PixelPoint(u, v - step));
+        double ju = du1.distance(du0) / (2 * step);
+        double jv = dv1.distance(dv0) / (2 * step);
+        double expectedSigma = cal.rmsPixels() * Math.sqrt((ju * ju + jv * jv) / 2);
+        assertTrue(cal.rmsPixels() > 0.1, "noisy calibration points: " + cal.rmsPixels());
+        assertEquals(expectedSigma, g.get(10).positionSigmaM(), 1e-4 * expectedSigma);
+        String e = assertThrows(IllegalArgumentException.class, () -> GroundTrajectory.of(p.withSite(Site.NONE), t,
+                FPS25, TrajectoryConfig.defaults())).getMessage();
+        assertTrue(e.contains("not calibrated"), e);
     }
 
     @Test
