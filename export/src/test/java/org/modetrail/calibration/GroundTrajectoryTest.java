@@ -182,10 +182,14 @@ class GroundTrajectoryTest {
         for (int i = 0; i < frames.length; i++) {
             double predicted = first.get(frames[i]).speedSigmaMs();
             double measured = std(speeds[i]);
+            System.out.printf("frame %d: speed sigma predicted %.4f m/s, measured %.4f m/s over %d runs%n", frames[i],
+                    predicted, measured, runs);
             assertEquals(predicted, measured, 0.08 * predicted, "frame " + frames[i]);
             assertEquals(11, mean(speeds[i]), 3 * measured / Math.sqrt(runs) + 0.02, "unbiased to 0.02 m/s");
         }
         double position = Math.sqrt((Math.pow(std(xs), 2) + Math.pow(std(ys), 2)) / 2);
+        System.out.printf("frame 30: position sigma predicted %.4f m, measured %.4f m%n",
+                first.get(30).positionSigmaM(), position);
         assertEquals(first.get(30).positionSigmaM(), position, 0.08 * position);
     }
 
