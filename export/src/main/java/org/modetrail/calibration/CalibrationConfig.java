@@ -14,15 +14,21 @@ package org.modetrail.calibration;
  *                         fit is poorly constrained across it; default 0.1
  * @param warnRmsPx        warn when the inliers' RMS image error exceeds this many pixels; default 2
  * @param warnRmsM         warn when the inliers' RMS ground error exceeds this many metres; default 0.5
+ * @param minInlierShare   refuse the fit unless the inliers are more than this share of the points; default 0.5 (a
+ *                         majority). Any 4 points fit some homography exactly, so RANSAC always finds 4 "inliers";
+ *                         when most points disagree with the fit, the input is more likely wrong as a whole (columns
+ *                         swapped, wrong units, points of another view) than a few clicks astray. Common practice,
+ *                         no published source.
  */
 public record CalibrationConfig(double thresholdPx, int iterations, long seed, double collinearWarnRatio,
-                                double warnRmsPx, double warnRmsM) {
+                                double warnRmsPx, double warnRmsM, double minInlierShare) {
     public static final double DEFAULT_THRESHOLD_PX = 3;
     public static final int DEFAULT_ITERATIONS = 2000;
     public static final long DEFAULT_SEED = 1;
     public static final double DEFAULT_COLLINEAR_WARN_RATIO = 0.1;
     public static final double DEFAULT_WARN_RMS_PX = 2;
     public static final double DEFAULT_WARN_RMS_M = 0.5;
+    public static final double DEFAULT_MIN_INLIER_SHARE = 0.5;
 
     public CalibrationConfig {
         if (!(thresholdPx > 0) || !Double.isFinite(thresholdPx)) {
@@ -40,18 +46,21 @@ public record CalibrationConfig(double thresholdPx, int iterations, long seed, d
             throw new IllegalArgumentException("the RMS warning levels must be positive, got " + warnRmsPx + " px, "
                     + warnRmsM + " m");
         }
+        if (!(minInlierShare >= 0 && minInlierShare < 1)) {
+            throw new IllegalArgumentException("the least share of inliers must be in [0, 1), got " + minInlierShare);
+        }
     }
 
     public static CalibrationConfig defaults() {
         return new CalibrationConfig(DEFAULT_THRESHOLD_PX, DEFAULT_ITERATIONS, DEFAULT_SEED,
-                DEFAULT_COLLINEAR_WARN_RATIO, DEFAULT_WARN_RMS_PX, DEFAULT_WARN_RMS_M);
+                DEFAULT_COLLINEAR_WARN_RATIO, DEFAULT_WARN_RMS_PX, DEFAULT_WARN_RMS_M, DEFAULT_MIN_INLIER_SHARE);
     }
 
     public CalibrationConfig withThresholdPx(double px) {
-        return new CalibrationConfig(px, iterations, seed, collinearWarnRatio, warnRmsPx, warnRmsM);
+        return new CalibrationConfig(px, iterations, seed, collinearWarnRatio, warnRmsPx, warnRmsM, minInlierShare);
     }
 
     public CalibrationConfig withSeed(long newSeed) {
-        return new CalibrationConfig(thresholdPx, iterations, newSeed, collinearWarnRatio, warnRmsPx, warnRmsM);
+        return new CalibrationConfig(thresholdPx, iterations, newSeed, collinearWarnRatio, warnRmsPx, warnRmsM, minInlierShare);
     }
 }

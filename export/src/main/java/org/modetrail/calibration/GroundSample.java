@@ -16,8 +16,10 @@ import org.modetrail.model.WorldPoint;
  *                       speed is NaN or 0. Meaningless when the speed is within a few {@code speedSigmaMs} of 0.
  * @param positionSigmaM standard deviation per axis of {@code raw}, metres: the calibration's RMS image error
  *                       carried through the homography's local Jacobian (see {@link GroundTrajectory})
- * @param speedSigmaMs   standard deviation of the speed, m/s, from the position sigmas through the derivative weights;
- *                       a lower bound (see {@link GroundTrajectory}); NaN where the speed is NaN
+ * @param speedSigmaMs   standard deviation of the speed, m/s: the image sigma carried through the Jacobian along the
+ *                       direction of motion and through the derivative weights; a lower bound (see
+ *                       {@link GroundTrajectory}); NaN where the speed is NaN. About 7 times larger on a run's first
+ *                       and last frames, where the window is shifted and the slope is taken at its end.
  */
 public record GroundSample(int frame, double timeS, WorldPoint raw, WorldPoint smoothed, double speedMs,
                            double headingDeg, double positionSigmaM, double speedSigmaMs) {

@@ -36,9 +36,10 @@ import org.modetrail.model.WorldPoint;
  * through the homography's Jacobian J at the contact point (for (x, y) = (a/w, b/w): dx/du = (h11 - x h31)/w, dx/dv =
  * (h12 - x h32)/w, dy/du = (h21 - y h31)/w, dy/dv = (h22 - y h32)/w), giving the covariance sigma_px^2 J J^T. The
  * reported position sigma is the RMS of its two axis sigmas, sigma_px ||J||_F / sqrt 2. sigma_px is the
- * calibration's RMS image error (or one given by the caller). The speed sigma carries the position sigmas through
- * the derivative weights c_j as independent errors: sigma_v = sqrt(sum c_j^2 sigma_j^2) (= sigma_p sqrt(sum c_j^2)
- * when they are equal). That is a lower bound: a calibration error shifts neighbouring positions alike (the errors
+ * calibration's RMS image error (or one given by the caller). The speed sigma carries the position errors along the
+ * direction of motion d (variance sigma_px^2 |J^T d|^2 at sample j) through the derivative weights c_j as
+ * independent errors: sigma_v = sqrt(sum c_j^2 sigma_d,j^2) (= sigma_p sqrt(sum c_j^2) when they are equal and the
+ * errors isotropic); to first order that is the sigma of |v|. That is a lower bound: a calibration error shifts neighbouring positions alike (the errors
  * are correlated), which moves all positions together and scales speeds by a common factor that no smoothing
  * averages away, and box jitter of the tracker is not in sigma_px at all. The position sigma is that of the raw
  * position, for the same reason (smoothing does not reduce a shared calibration error).
@@ -127,6 +128,10 @@ public final class GroundTrajectory {
         double[] x = new double[cap];
         double[] y = new double[cap];
         double[] sigma = new double[cap];
+        double[] j11s = new double[cap];
+        double[] j12s = new double[cap];
+        double[] j21s = new double[cap];
+        double[] j22s = new double[cap];
         int n = 0;
         for (FrameAnnotation a : track.frames().values()) {
             if (!a.isVisible()) {
@@ -158,6 +163,10 @@ public final class GroundTrajectory {
             x[n] = px;
             y[n] = py;
             sigma[n] = pixelSigma * Math.sqrt((j11 * j11 + j12 * j12 + j21 * j21 + j22 * j22) / 2);
+            j11s[n] = pixelSigma * j11;
+            j12s[n] = pixelSigma * j12;
+            j21s[n] = pixelSigma * j21;
+            j22s[n] = pixelSigma * j22;
             n++;
         }
 
@@ -216,7 +225,6 @@ public final class GroundTrajectory {
                 double ay = 0;
                 double vx = 0;
                 double vy = 0;
-                double var = 0;
                 for (int j = lo; j < hi; j++) {
                     double c0 = value[j - lo];
                     double c1 = slope[j - lo];
@@ -224,11 +232,25 @@ public final class GroundTrajectory {
                     ay += c0 * y[j];
                     vx += c1 * x[j];
                     vy += c1 * y[j];
-                    var += c1 * c1 * sigma[j] * sigma[j];
                 }
                 sx[i] = ax;
                 sy[i] = ay;
                 speed[i] = Math.hypot(vx, vy);
+                double var = 0;
+                if (speed[i] > 0) {
+                    double dx = vx / speed[i];
+                    double dy = vy / speed[i];
+                    for (int j = lo; j < hi; j++) {
+                        double c1 = slope[j - lo];
+                        double ex = j11s[j] * dx + j21s[j] * dy;
+                        double ey = j12s[j] * dx + j22s[j] * dy;
+                        var += c1 * c1 * (ex * ex + ey * ey);
+                    }
+                } else {
+                    for (int j = lo; j < hi; j++) {
+                        var += slope[j - lo] * slope[j - lo] * sigma[j] * sigma[j];
+                    }
+                }
                 if (speed[i] > 0) {
                     double deg = Math.toDegrees(Math.atan2(vy, vx));
                     double hd = deg < 0 ? deg + 360 : deg;

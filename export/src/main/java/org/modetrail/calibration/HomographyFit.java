@@ -35,8 +35,9 @@ import georegression.struct.homography.Homography2D_F64;
  *
  * <p>One error is used throughout, for the threshold, the refinement and the inlier flags: the distance in pixels
  * between the point the user clicked and its ground point mapped into the image. To get that error from BoofCV the
- * fit is made in the direction ground to image (BoofCV measures the error on the second point of each pair) and
- * inverted at the end. After the refinement every point is re-classified by that error and the inliers refitted,
+ * fit is made in the direction ground to image (BoofCV measures the error on the second point of each pair, and its
+ * RANSAC threshold is that distance, not its square: checked on a 5 x 5 grid with one point moved 1.5 or 2.5 px
+ * under a 2 px threshold) and inverted at the end. After the refinement every point is re-classified by that error and the inliers refitted,
  * until the inlier set no longer changes (at most {@value #MAX_ROUNDS} rounds).
  *
  * <p>Each point also gets its error in metres: the distance on the ground between the ground point the user gave and
@@ -235,6 +236,13 @@ public final class HomographyFit {
                     + " ground plane within " + fmt(config.thresholdPx()) + " px, and a fit needs 4; check the points"
                     + " (image and ground positions swapped, wrong units, typing errors) or raise the threshold");
         }
+        if (!(inliers > config.minInlierShare() * n)) {
+            throw new IllegalArgumentException("only " + inliers + " of the " + n + " calibration points agree on one"
+                    + " ground plane within " + fmt(config.thresholdPx()) + " px, not more than "
+                    + Math.round(100 * config.minInlierShare()) + " %; the points as a whole look wrong: check that"
+                    + " image and ground columns are not swapped, that ground positions are in metres and all from"
+                    + " one plan, and that the image points are from this video");
+        }
     }
 
     private static List<String> warnings(CalibrationConfig c, double[] errPx, boolean[] inlier, int inliers,
@@ -253,7 +261,8 @@ public final class HomographyFit {
         }
         if (inliers == 4) {
             w.add("Only 4 points are used, so the fit passes through them exactly and their errors say nothing about"
-                    + " its accuracy. Add more points to check it.");
+                    + " its accuracy" + (n > 4 ? "; and since any 4 points fit exactly, it cannot tell which of the "
+                    + n + " points are wrong" : "") + ". Add more points to check it.");
         }
         if (rmsPx > c.warnRmsPx()) {
             w.add("The points fit with an RMS error of " + fmt(rmsPx) + " px in the image, above "

@@ -1,0 +1,212 @@
+package org.modetrail.calibration;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+import java.util.function.DoubleUnaryOperator;
+import java.util.function.IntToDoubleFunction;
+
+import org.junit.jupiter.api.Test;
+import org.modetrail.model.Box;
+import org.modetrail.model.ContactPoint;
+import org.modetrail.model.FrameAnnotation;
+import org.modetrail.model.GroundCalibration;
+import org.modetrail.model.Homography;
+import org.modetrail.model.ObjectClass;
+import org.modetrail.model.PixelPoint;
+import org.modetrail.model.Presence;
+import org.modetrail.model.Project;
+import org.modetrail.model.Site;
+import org.modetrail.model.Track;
+import org.modetrail.model.VideoRef;
+import org.modetrail.model.WorldPoint;
+
+/**
+ * Ground paths of objects whose ground motion is known in closed form, seen through a known homography: the box's
+ * bottom centre is put exactly where the ground point projects. A quadratic Savitzky-Golay fit reproduces positions
+ * and velocities of motion at constant speed or constant acceleration exactly (a least-squares polynomial of order
+ * 2 reproduces any polynomial of order 2 or less), so those checks are at rounding level.
+ */
+class GroundTrajectoryTest {
+    static final Homography IMAGE_TO_WORLD = new Homography(Scenes.GROUND_TO_IMAGE).inverse();
+    static final IntToDoubleFunction FPS25 = GroundTrajectory.constantRate(25);
+
+    /** A track whose bottom-centre contact point is at ground (gx(t), gy(t)), with optional image noise. */
+    static Track track(int frames, IntToDoubleFunction time, DoubleUnaryOperator gx, DoubleUnaryOperator gy,
+                       double noisePx, Random r) {
+        Map<Integer, FrameAnnotation> map = new HashMap<>();
+        for (int f = 0; f < frames; f++) {
+            double t = time.applyAsDouble(f);
+            double[] p = Scenes.apply(Scenes.GROUND_TO_IMAGE, gx.applyAsDouble(t), gy.applyAsDouble(t));
+            double u = p[0] + (r == null ? 0 : noisePx * r.nextGaussian());
+            double v = p[1] + (r == null ? 0 : noisePx * r.nextGaussian());
+            map.put(f, FrameAnnotation.tracked(f, new Box(u - 15, v - 12, 30, 12), 0.9));
+        }
+        return new Track(1, "car", "", map);
+    }
+
+    @Test
+    void constantSpeedAndConstantAccelerationAreRecoveredExactly() {
+        // 14 m/s along +y on a lane at x = 5.25 m, 3 s at 25 fps.
+        Track t = track(75, FPS25, s -> 5.25, s -> 15 + 14 * s, 0, null);
+        List<GroundSample> g = GroundTrajectory.of(t, ContactPoint.BOTTOM_CENTRE, IMAGE_TO_WORLD, 0.5, FPS25,
+                TrajectoryConfig.defaults());
+        assertEquals(75, g.size());
+        for (GroundSample s : g) {
+            assertEquals(14, s.speedMs(), 1e-6, "frame " + s.frame());
+            assertEquals(90, s.headingDeg(), 1e-6, "+y is 90 degrees");
+            assertEquals(15 + 14 * s.timeS(), s.raw().y(), 1e-8);
+            assertEquals(s.raw().y(), s.smoothed().y(), 1e-7);
+            assertTrue(s.positionSigmaM() > 0 && s.speedSigmaMs() > 0);
+        }
+        // Braking at 3 m/s^2 from 15 m/s along -y, and drifting across the road along -x: also exact, including
+        // the shifted windows at both ends of the run.
+        Track b = track(75, FPS25, s -> 12 - 1.5 * s, s -> 60 - 15 * s + 1.5 * s * s, 0, null);
+        for (GroundSample s : GroundTrajectory.of(b, ContactPoint.BOTTOM_CENTRE, IMAGE_TO_WORLD, 0.5, FPS25,
+                TrajectoryConfig.defaults())) {
+            double vy = -15 + 3 * s.timeS();
+            assertEquals(Math.hypot(1.5, vy), s.speedMs(), 1e-6, "frame " + s.frame());
+            double heading = Math.toDegrees(Math.atan2(vy, -1.5)) + 360;
+            assertEquals(heading, s.headingDeg(), 1e-6, "moving -x and -y: between 180 and 270 degrees");
+        }
+    }
+
+    @Test
+    void unevenFrameTimesAreUsedAsGiven() {
+        // Frame times with jitter of up to 8 ms (a variable-rate video): speed stays exact because the fit uses the
+        // actual times.
+        Random r = new Random(2);
+        double[] times = new double[60];
+        for (int f = 0; f < 60; f++) {
+            times[f] = f / 25.0 + 0.008 * (r.nextDouble() - 0.5);
+        }
+        IntToDoubleFunction table = GroundTrajectory.table(times);
+        Track t = track(60, table, s -> 1.75 + 0.5 * s, s -> 20 + 9 * s, 0, null);
+        for (GroundSample s : GroundTrajectory.of(t, ContactPoint.BOTTOM_CENTRE, IMAGE_TO_WORLD, 0, table,
+                TrajectoryConfig.defaults())) {
+            assertEquals(Math.hypot(0.5, 9), s.speedMs(), 1e-6);
+            assertEquals(0, s.speedSigmaMs(), 0, "no image error given");
+        }
+        assertThrows(IllegalArgumentException.class, () -> GroundTrajectory.of(t, ContactPoint.BOTTOM_CENTRE,
+                IMAGE_TO_WORLD, 0, GroundTrajectory.table(new double[10]), TrajectoryConfig.defaults()));
+    }
+
+    @Test
+    void gapsSplitRunsAndShortRunsHaveNoSpeed() {
+        Track full = track(60, FPS25, s -> 5.25, s -> 15 + 10 * s, 0, null);
+        Track t = full;
+        for (int f = 20; f < 25; f++) {
+            t = t.with(FrameAnnotation.markedBy(f, Presence.HIDDEN));
+        }
+        t = t.with(FrameAnnotation.markedBy(28, Presence.HIDDEN));
+        t = t.without(40, 41); // frames 25..27: a run of 3; 29..39: a run of 11, shorter than 13 frames (0.5 s)
+        List<GroundSample> g = GroundTrajectory.of(t, ContactPoint.BOTTOM_CENTRE, IMAGE_TO_WORLD, 0.5, FPS25,
+                TrajectoryConfig.defaults());
+        assertEquals(60 - 5 - 1 - 2, g.size(), "only visible frames");
+        for (GroundSample s : g) {
+            assertFalse(s.frame() >= 20 && s.frame() < 25 || s.frame() == 28 || s.frame() == 40 || s.frame() == 41);
+            if (s.frame() >= 25 && s.frame() <= 27) {
+                assertFalse(s.hasSpeed(), "3 samples are fewer than order + 2");
+                assertTrue(Double.isNaN(s.headingDeg()) && Double.isNaN(s.speedSigmaMs()));
+                assertEquals(s.raw(), s.smoothed());
+            } else {
+                assertEquals(10, s.speedMs(), 1e-6, "frame " + s.frame());
+            }
+        }
+    }
+
+    @Test
+    void aProjectGivesTheCalibrationAndTheClassContactPoint() {
+        GroundCalibration cal = HomographyFit.fit(Scenes.road(20, 0.3, 1));
+        // A frame whose contact point is above the horizon (v about 8 px here) is not on the ground: left out.
+        Track t = track(30, FPS25, s -> 5.25, s -> 20 + 8 * s, 0, null)
+                .with(FrameAnnotation.tracked(30, new Box(480, 0, 10, 2), 0.5));
+        VideoRef video = new VideoRef("road.mp4", 960, 540, 100, "");
+        Project p = new Project(video, List.of(new ObjectClass("car", 0xff0000, ContactPoint.CENTRE)), List.of(t),
+                new Site(cal, List.of(), List.of()));
+        List<GroundSample> g = GroundTrajectory.of(p, t, FPS25, TrajectoryConfig.defaults());
+        assertEquals(30, g.size(), "frame 30 lies beyond the horizon");
+        Box b = t.at(10).orElseThrow().box();
+        assertEquals(cal.imageToWorld().toWorld(new PixelPoint(b.centreX(), b.centreY())), g.get(10).raw(),
+                "the class's contact point, the box centre");
+        assertEquals(90, g.get(10).headingDeg(), 1, "moving along +y");
+        // Position sigma: the calibration's RMS image error through the map's Jacobian, here by central differences
+        // of the map itself (step 0.01 px), sigma = rms * sqrt((|dX/du|^2 + |dX/dv|^2) / 2).
+        double u = b.centreX();
+        double v = b.centreY();
+        double step = 0.01;
+        WorldPoint du1 = cal.imageToWorld().toWorld(new PixelPoint(u + step, v));
+        WorldPoint du0 = cal.imageToWorld().toWorld(new PixelPoint(u - step, v));
+        WorldPoint dv1 = cal.imageToWorld().toWorld(new PixelPoint(u, v + step));
+        WorldPoint dv0 = cal.imageToWorld().toWorld(new PixelPoint(u, v - step));
+        double ju = du1.distance(du0) / (2 * step);
+        double jv = dv1.distance(dv0) / (2 * step);
+        double expectedSigma = cal.rmsPixels() * Math.sqrt((ju * ju + jv * jv) / 2);
+        assertTrue(cal.rmsPixels() > 0.1, "noisy calibration points: " + cal.rmsPixels());
+        assertEquals(expectedSigma, g.get(10).positionSigmaM(), 1e-4 * expectedSigma);
+        String e = assertThrows(IllegalArgumentException.class, () -> GroundTrajectory.of(p.withSite(Site.NONE), t,
+                FPS25, TrajectoryConfig.defaults())).getMessage();
+        assertTrue(e.contains("not calibrated"), e);
+    }
+
+    @Test
+    void speedSigmaMatchesTheScatterOfIndependentImageNoise() {
+        // Monte Carlo check of the first-order propagation: independent Gaussian noise of 0.8 px per axis on every
+        // box; the spread of the speed at a frame mid-run and at the run's first frame (shifted window), and of the
+        // raw position, against the predicted sigmas. 1000 runs: the sample sigma is within about 4.5 % of the true
+        // one (3 standard errors, 3 / sqrt(2 * 1000)); tolerance 8 % to leave room for the nonlinearity.
+        int runs = 1000;
+        Random r = new Random(9);
+        int[] frames = {0, 30};
+        double[][] speeds = new double[frames.length][runs];
+        double[] xs = new double[runs];
+        double[] ys = new double[runs];
+        List<GroundSample> first = null;
+        for (int k = 0; k < runs; k++) {
+            Track t = track(61, FPS25, s -> 8.75, s -> 40 - 11 * s, 0.8, r);
+            List<GroundSample> g = GroundTrajectory.of(t, ContactPoint.BOTTOM_CENTRE, IMAGE_TO_WORLD, 0.8, FPS25,
+                    TrajectoryConfig.defaults());
+            first = first == null ? g : first;
+            for (int i = 0; i < frames.length; i++) {
+                speeds[i][k] = g.get(frames[i]).speedMs();
+            }
+            xs[k] = g.get(30).raw().x();
+            ys[k] = g.get(30).raw().y();
+        }
+        for (int i = 0; i < frames.length; i++) {
+            double predicted = first.get(frames[i]).speedSigmaMs();
+            double measured = std(speeds[i]);
+            System.out.printf("frame %d: speed sigma predicted %.4f m/s, measured %.4f m/s over %d runs%n", frames[i],
+                    predicted, measured, runs);
+            assertEquals(predicted, measured, 0.08 * predicted, "frame " + frames[i]);
+            assertEquals(11, mean(speeds[i]), 3 * measured / Math.sqrt(runs) + 0.02, "unbiased to 0.02 m/s");
+        }
+        double position = Math.sqrt((Math.pow(std(xs), 2) + Math.pow(std(ys), 2)) / 2);
+        System.out.printf("frame 30: position sigma predicted %.4f m, measured %.4f m%n",
+                first.get(30).positionSigmaM(), position);
+        assertEquals(first.get(30).positionSigmaM(), position, 0.08 * position);
+    }
+
+    static double mean(double[] a) {
+        double s = 0;
+        for (double v : a) {
+            s += v;
+        }
+        return s / a.length;
+    }
+
+    static double std(double[] a) {
+        double m = mean(a);
+        double s = 0;
+        for (double v : a) {
+            s += (v - m) * (v - m);
+        }
+        return Math.sqrt(s / (a.length - 1));
+    }
+}
