@@ -1,6 +1,7 @@
 package org.modetrail.demo;
 
 import java.io.BufferedWriter;
+import java.io.OutputStreamWriter;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
@@ -9,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.attribute.PosixFilePermissions;
+import org.modetrail.format.project.AtomicWrite;
 
 /**
  * Writes files so that readers see either the old file or the complete new one, never a partial write: the content
@@ -26,17 +28,11 @@ final class AtomicFiles {
     }
 
     static void writeText(Path target, TextContent content) throws IOException {
-        Path absolute = target.toAbsolutePath();
-        Files.createDirectories(absolute.getParent());
-        Path temp = Files.createTempFile(absolute.getParent(), "." + absolute.getFileName(), ".part");
-        try {
-            try (BufferedWriter out = Files.newBufferedWriter(temp, StandardCharsets.UTF_8)) {
-                content.writeTo(out);
-            }
-            moveIntoPlace(temp, absolute);
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+        AtomicWrite.replace(target, os -> {
+            BufferedWriter out = new BufferedWriter(new OutputStreamWriter(os, StandardCharsets.UTF_8));
+            content.writeTo(out);
+            out.flush();
+        });
     }
 
     static void moveIntoPlace(Path temp, Path target) throws IOException {

@@ -9,7 +9,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.modetrail.format.project.AtomicFiles;
+import org.modetrail.format.project.AtomicWrite;
 import org.modetrail.model.CountingLine;
 import org.modetrail.model.Site;
 import org.modetrail.model.Zone;
@@ -28,7 +28,7 @@ public final class SummaryCsv {
     }
 
     public static void write(List<TrackSummary> summaries, Site site, Path out) throws IOException {
-        AtomicFiles.write(out, os -> {
+        AtomicWrite.replace(out, os -> {
             Writer w = new BufferedWriter(new OutputStreamWriter(os, StandardCharsets.UTF_8));
             w.write(header(site));
             w.write('\n');

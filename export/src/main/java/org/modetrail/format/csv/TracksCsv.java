@@ -2,21 +2,16 @@ package org.modetrail.format.csv;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
-import java.io.OutputStream;
 import java.io.OutputStreamWriter;
-import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.IntToDoubleFunction;
 
+import org.modetrail.format.project.AtomicWrite;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.Project;
 import org.modetrail.model.Track;
@@ -35,39 +30,25 @@ public final class TracksCsv {
 
     /** @param timeOfFrame seconds from the first frame for each frame index */
     public static void write(Project project, IntToDoubleFunction timeOfFrame, Path out) throws IOException {
-        Path dir = out.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + out.getFileName(), ".tmp");
-        try {
-            try (OutputStream raw = Files.newOutputStream(tmp);
-                 BufferedWriter w = new BufferedWriter(new OutputStreamWriter(raw, StandardCharsets.UTF_8), 1 << 16)) {
-                w.write(HEADER);
-                w.write('\n');
-                List<Track> tracks = new ArrayList<>(project.tracks());
-                tracks.sort(Comparator.comparingInt(Track::id));
-                for (Track t : tracks) {
-                    String cls = CsvLine.quote(t.className());
-                    for (FrameAnnotation a : t.frames().values()) {
-                        if (!a.isVisible()) {
-                            continue;
-                        }
-                        w.write(String.format(Locale.ROOT, "%d,%s,%d,%.6f,%.3f,%.3f,%.3f,%.3f,%s,%.4f\n", t.id(), cls,
-                                a.frame(), timeOfFrame.applyAsDouble(a.frame()), a.box().x(), a.box().y(),
-                                a.box().width(), a.box().height(), a.source().name().toLowerCase(Locale.ROOT),
-                                a.score()));
+        AtomicWrite.replace(out, raw -> {
+            BufferedWriter w = new BufferedWriter(new OutputStreamWriter(raw, StandardCharsets.UTF_8), 1 << 16);
+            w.write(HEADER);
+            w.write('\n');
+            List<Track> tracks = new ArrayList<>(project.tracks());
+            tracks.sort(Comparator.comparingInt(Track::id));
+            for (Track t : tracks) {
+                String cls = CsvLine.quote(t.className());
+                for (FrameAnnotation a : t.frames().values()) {
+                    if (!a.isVisible()) {
+                        continue;
                     }
+                    w.write(String.format(Locale.ROOT, "%d,%s,%d,%.6f,%.3f,%.3f,%.3f,%.3f,%s,%.4f\n", t.id(), cls,
+                            a.frame(), timeOfFrame.applyAsDouble(a.frame()), a.box().x(), a.box().y(),
+                            a.box().width(), a.box().height(), a.source().name().toLowerCase(Locale.ROOT),
+                            a.score()));
                 }
             }
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
-                ch.force(true);
-            }
-            try {
-                Files.move(tmp, out, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, out, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+            w.flush();
+        });
     }
 }
