@@ -1,0 +1,28 @@
+package org.modetrail.picture;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.modetrail.model.Project;
+
+/** Writes the plots to /tmp/modetrail-pictures for a person to look at; checks only that they were written. */
+class PlotLookTest {
+    @Test
+    void writeForViewing() throws Exception {
+        Path dir = Path.of(System.getProperty("java.io.tmpdir"), "modetrail-pictures");
+        Files.createDirectories(dir);
+        Project arena = TruthProjects.arena(0xD55E00, 0, 449);
+        List<PlotSeries> image = ProjectSeries.imagePlane(arena, n -> n / 25.0, TrajectoryPoint.CONTACT,
+                ColourBy.TRACK);
+        Plots.writeImageTrajectoryPng(image, 640, 480, PlotOptions.defaults(), dir.resolve("arena-image.png"));
+        Plots.writeImageTrajectorySvg(image, 640, 480, PlotOptions.defaults(), dir.resolve("arena-image.svg"));
+        Plots.writeGroundTrajectoryPng(TruthProjects.roadGround(), PlotOptions.defaults(),
+                dir.resolve("road-ground.png"));
+        Plots.writeSpeedPng(TruthProjects.roadSpeeds(true), PlotOptions.defaults(), dir.resolve("road-speed.png"));
+        Plots.writeSpeedPng(List.of(), PlotOptions.defaults(), dir.resolve("empty-speed.png"));
+        assertTrue(Files.size(dir.resolve("arena-image.png")) > 1000);
+    }
+}
