@@ -186,7 +186,7 @@ final class Charts {
     }
 
     private static NumberAxis axis(String label) {
-        NumberAxis a = new NumberAxis(label);
+        NumberAxis a = new TextLabelAxis(label);
         a.setLabelFont(LABEL);
         a.setTickLabelFont(TICK);
         a.setAutoRangeIncludesZero(false);
