@@ -26,11 +26,12 @@ import org.modetrail.model.Track;
 
 /**
  * Draws one frame's tracks onto a picture with Java2D: trails first, then boxes, then labels, so labels stay
- * readable where tracks cross. Everything coloured is laid over a wider dark stroke.
+ * readable where tracks cross. Every coloured stroke lies on a wider halo of the opposite lightness (near-black
+ * under light class colours, white under dark ones), so a box is seen on light ground and on dark ground alike.
  */
 final class OverlayPainter {
-    /** Under every coloured stroke; dark enough to separate a light colour from light ground. */
-    static final Color OUTLINE = new Color(16, 16, 16, 210);
+    /** Opacity of the halo under every coloured stroke. */
+    static final int HALO_ALPHA = 210;
     private static final int UNKNOWN_CLASS = 0x9A9A9A;
 
     private final OverlayStyle style;
@@ -44,9 +45,12 @@ final class OverlayPainter {
     private final Line2D.Double line = new Line2D.Double();
     private final Rectangle2D.Double rect = new Rectangle2D.Double();
     private final Ellipse2D.Double dot = new Ellipse2D.Double();
+    /** The label tags drawn so far on the current frame. */
+    private final List<Rectangle2D> placed = new ArrayList<>();
 
     /** A track with what drawing it needs, worked out once. */
-    private record Painted(Track track, Color colour, Color text, ContactPoint trailPoint, String label) {
+    private record Painted(Track track, Color colour, Color text, Color halo, ContactPoint trailPoint,
+                           String label) {
     }
 
     OverlayPainter(Project project, OverlayStyle style, int width, int height) {
@@ -57,7 +61,9 @@ final class OverlayPainter {
             int rgb = project.objectClass(t.className()).map(ObjectClass::colour).orElse(UNKNOWN_CLASS);
             ContactPoint p = style.trailPoint() == OverlayStyle.TrailPoint.CENTRE ? ContactPoint.CENTRE
                     : project.contactPoint(t.className());
-            tracks.add(new Painted(t, new Color(rgb), textColourOn(rgb), p, t.id() + " " + t.className()));
+            Color text = textColourOn(rgb);
+            Color halo = new Color(text.getRed(), text.getGreen(), text.getBlue(), HALO_ALPHA);
+            tracks.add(new Painted(t, new Color(rgb), text, halo, p, t.id() + " " + t.className()));
         }
         font = new Font(Font.SANS_SERIF, Font.BOLD, style.fontSize());
         float w = style.lineWidth(), k = style.keyframeLineWidth(), o = outlineExtra(w);
@@ -72,12 +78,12 @@ final class OverlayPainter {
         trailOutline = new BasicStroke(w + o, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
     }
 
-    /** The dark outline is this much wider than the stroke it lies under: a pixel each side, more for thick lines. */
+    /** The halo is this much wider than the stroke it lies under: a pixel each side, more for thick lines. */
     static float outlineExtra(float lineWidth) {
         return Math.max(2f, lineWidth * 0.5f);
     }
 
-    /** Black text on light colours, white on dark ones (by relative luminance, sRGB weights). */
+    /** Black text (and halo) on light colours, white on dark ones (by relative luminance, sRGB weights). */
     static Color textColourOn(int rgb) {
         double r = ((rgb >> 16) & 0xFF) / 255.0, g = ((rgb >> 8) & 0xFF) / 255.0, b = (rgb & 0xFF) / 255.0;
         double luminance = 0.2126 * r + 0.7152 * g + 0.0722 * b;
@@ -105,6 +111,7 @@ final class OverlayPainter {
             }
         }
         if (style.showLabels()) {
+            placed.clear();
             g.setFont(font);
             FontMetrics fm = g.getFontMetrics();
             for (Painted p : tracks) {
@@ -130,7 +137,7 @@ final class OverlayPainter {
             under = trackedOutline;
             over = trackedStroke;
         }
-        g.setColor(OUTLINE);
+        g.setColor(p.halo());
         g.setStroke(under);
         g.draw(rect);
         g.setColor(p.colour());
@@ -145,7 +152,7 @@ final class OverlayPainter {
         double span = Math.max(1, frame - from);
         for (int pass = 0; pass < 2; pass++) {
             g.setStroke(pass == 0 ? trailOutline : trailStroke);
-            g.setColor(pass == 0 ? OUTLINE : p.colour());
+            g.setColor(pass == 0 ? p.halo() : p.colour());
             PixelPoint last = null;
             int lastFrame = Integer.MIN_VALUE;
             for (FrameAnnotation a : recent.values()) {
@@ -170,34 +177,60 @@ final class OverlayPainter {
         PixelPoint q = p.trailPoint().on(now.box());
         double r = style.lineWidth() + 1.5;
         dot.setFrame(q.x() - r - 1, q.y() - r - 1, 2 * r + 2, 2 * r + 2);
-        g.setColor(OUTLINE);
+        g.setColor(p.halo());
         g.fill(dot);
         dot.setFrame(q.x() - r, q.y() - r, 2 * r, 2 * r);
         g.setColor(p.colour());
         g.fill(dot);
     }
 
-    /** The id and class on a tag of the class colour, above the box's top-left corner (inside when no room). */
+    /**
+     * The id and class on a tag of the class colour, above the box's top-left corner; where that would cover a tag
+     * already drawn on this frame (or leave the picture), below the box, then inside its top, then stacked higher.
+     */
     private void label(Graphics2D g, FontMetrics fm, Painted p, Box b) {
         int pad = Math.max(2, style.fontSize() / 5);
         int tw = fm.stringWidth(p.label()) + 2 * pad;
         int th = fm.getAscent() + fm.getDescent() + pad;
         double half = style.keyframeLineWidth() / 2 + 1;
-        double x = Math.floor(b.x() - half);
-        double y = Math.floor(b.y() - half - th);
-        if (y < 0) {
-            y = Math.ceil(b.y() + half);
+        double x = Math.max(0, Math.min(Math.floor(b.x() - half), width - tw));
+        double above = Math.floor(b.y() - half - th);
+        double[] candidates = {above, Math.ceil(b.bottom() + half), Math.ceil(b.y() + half), above - th - 1,
+            above - 2 * (th + 1)};
+        Rectangle2D.Double tag = null;
+        for (double y : candidates) {
+            if (y < 0 || y + th > height) {
+                continue;
+            }
+            Rectangle2D.Double r = new Rectangle2D.Double(x, y, tw, th);
+            if (tag == null) {
+                tag = r;
+            }
+            if (free(r)) {
+                tag = r;
+                break;
+            }
         }
-        x = Math.max(0, Math.min(x, width - tw));
-        y = Math.max(0, Math.min(y, height - th));
-        rect.setRect(x, y, tw, th);
+        if (tag == null) {
+            tag = new Rectangle2D.Double(x, Math.max(0, Math.min(above, height - th)), tw, th);
+        }
+        placed.add(tag);
         g.setColor(p.colour());
-        g.fill(rect);
+        g.fill(tag);
         g.setStroke(tagStroke);
-        g.setColor(OUTLINE);
-        rect.setRect(x - 0.5, y - 0.5, tw + 1, th + 1);
+        g.setColor(p.halo());
+        rect.setRect(tag.x - 0.5, tag.y - 0.5, tw + 1, th + 1);
         g.draw(rect);
         g.setColor(p.text());
-        g.drawString(p.label(), (float) (x + pad), (float) (y + pad / 2.0 + fm.getAscent()));
+        g.drawString(p.label(), (float) (tag.x + pad), (float) (tag.y + pad / 2.0 + fm.getAscent()));
+    }
+
+    private boolean free(Rectangle2D r) {
+        for (Rectangle2D other : placed) {
+            if (other.intersects(r)) {
+                return false;
+            }
+        }
+        return true;
     }
 }

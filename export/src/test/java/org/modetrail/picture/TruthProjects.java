@@ -23,6 +23,7 @@ public final class TruthProjects {
     public static final Path CLIPS = Path.of("..", "clips");
     public static final Path ARENA = CLIPS.resolve("arena.mp4");
     public static final Path ARENA_TRUTH = CLIPS.resolve("arena-truth.csv");
+    public static final Path ROAD = CLIPS.resolve("road.mp4");
     public static final Path ROAD_TRUTH = CLIPS.resolve("road-truth.csv");
 
     private TruthProjects() {
@@ -58,9 +59,21 @@ public final class TruthProjects {
      * tracked otherwise, so all three looks are drawn. Rows with visible 0 or an empty box are hidden.
      */
     public static Project arena(int classColour, int from, int to) throws IOException {
+        return project(ARENA_TRUTH, new VideoRef("arena.mp4", 640, 480, 450, ""), c -> classColour, from, to);
+    }
+
+    /** The road clip's truth as a project, one palette colour per class, with the same sources as {@link #arena}. */
+    public static Project road(int from, int to) throws IOException {
+        Map<String, Integer> colours = new HashMap<>();
+        return project(ROAD_TRUTH, new VideoRef("road.mp4", 960, 540, 450, ""),
+                c -> colours.computeIfAbsent(c, k -> Palette.colour(colours.size())), from, to);
+    }
+
+    private static Project project(Path truth, VideoRef video, java.util.function.ToIntFunction<String> colourOf,
+                                   int from, int to) throws IOException {
         Map<Integer, String> classOf = new LinkedHashMap<>();
         Map<Integer, TreeMap<Integer, FrameAnnotation>> frames = new TreeMap<>();
-        for (Row r : rows(ARENA_TRUTH)) {
+        for (Row r : rows(truth)) {
             if (r.frame() < from || r.frame() > to) {
                 continue;
             }
@@ -82,11 +95,12 @@ public final class TruthProjects {
         List<Track> tracks = new ArrayList<>();
         for (Map.Entry<Integer, TreeMap<Integer, FrameAnnotation>> e : frames.entrySet()) {
             String cls = classOf.get(e.getKey());
-            classes.computeIfAbsent(cls, n -> new ObjectClass(n, classColour));
+            classes.computeIfAbsent(cls, n -> new ObjectClass(n, colourOf.applyAsInt(n)));
             tracks.add(new Track(e.getKey(), cls, "", e.getValue()));
         }
-        VideoRef video = new VideoRef("arena.mp4", 640, 480, 450, "");
-        return new Project(video, List.copyOf(classes.values()), tracks);
+        List<ObjectClass> sorted = new ArrayList<>(classes.values());
+        sorted.sort(java.util.Comparator.comparing(ObjectClass::name));
+        return new Project(video, sorted, tracks);
     }
 
     /** Ground-plane series of the road clip's truth, one per road user, palette colours. */
