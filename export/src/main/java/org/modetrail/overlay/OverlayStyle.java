@@ -2,7 +2,7 @@ package org.modetrail.overlay;
 
 /**
  * How tracks are drawn over the video. Every box and trail is stroked twice, first a wider halo of the opposite
- * lightness (near-black under light class colours, white under dark ones), then the class colour on top, so it
+ * lightness (black under light class colours, white under dark ones), then the class colour on top, so it
  * stands out on light and on dark footage alike. A box's line says where it came from:
  * keyframes (the user's boxes) are drawn thickest, tracked boxes with a plain line, interpolated ones dashed.
  *

@@ -54,6 +54,8 @@ class OverlayConfigTest {
     void labelTextContrastsWithTheTag() {
         assertEquals(Color.BLACK, OverlayPainter.textColourOn(0xF0E442));
         assertEquals(Color.WHITE, OverlayPainter.textColourOn(0x0072B2));
-        assertEquals(Color.WHITE, OverlayPainter.textColourOn(0xFF00FF));
+        assertEquals(Color.BLACK, OverlayPainter.textColourOn(0xFF00FF));
+        assertEquals(Color.WHITE, OverlayPainter.textColourOn(0x000000));
+        assertEquals(Color.BLACK, OverlayPainter.textColourOn(0x009E73));
     }
 }

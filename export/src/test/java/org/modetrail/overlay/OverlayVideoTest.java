@@ -93,12 +93,6 @@ class OverlayVideoTest {
         assertEquals(Integer.toString(FRAMES), s.get("nb_read_frames"));
         assertEquals("25/1", s.get("r_frame_rate"));
         assertOverlayMatches(out);
-        // For a person to look at: the overlay and one of its frames, decoded by ffmpeg.
-        Path look = Path.of(System.getProperty("java.io.tmpdir"), "modetrail-pictures");
-        Files.createDirectories(look);
-        Files.copy(out, look.resolve("arena-overlay.mp4"), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        Probe.extractFrame(out, 30, look.resolve("arena-overlay-frame30.png"));
-        Probe.extractFrame(out, 40, look.resolve("arena-overlay-frame40.png"));
     }
 
     /**
@@ -144,8 +138,6 @@ class OverlayVideoTest {
                             + worst);
                 }
                 double[] far = farDifference(o, s, f);
-                System.out.printf("frame %d: edge %d/%d near, worst %.1f; far mean abs %.2f, psnr %.1f dB over %d px%n",
-                        f, near, samples, worst, far[0], far[1], (long) far[2]);
                 assertTrue(far[2] > 0.5 * 640 * 480, "frame " + f + ": too few far pixels " + far[2]);
                 assertTrue(far[0] <= FAR_MEAN_ABS, "frame " + f + ": mean abs difference " + far[0]
                         + " away from the drawing");
@@ -244,6 +236,24 @@ class OverlayVideoTest {
         assertFalse(Files.exists(fresh));
         try (Stream<Path> files = Files.list(sub)) {
             assertEquals(List.of(out), files.toList(), "no partial file is left");
+        }
+    }
+
+    @Test
+    void aFailureMidwayLeavesNoFile() throws Exception {
+        Path sub = Files.createDirectories(dir.resolve("fail"));
+        Path out = sub.resolve("overlay.mp4");
+        try (VideoSource src = VideoSource.open(TruthProjects.ARENA, options())) {
+            IllegalStateException e = assertThrows(IllegalStateException.class, () -> OverlayVideo.write(src,
+                    project, out, OverlayStyle.defaults(), OverlayEncoding.defaults(), 0, FRAMES, (d, total) -> {
+                        if (d == 7) {
+                            throw new IllegalStateException("disk full, say");
+                        }
+                    }, null));
+            assertEquals("disk full, say", e.getMessage());
+        }
+        try (Stream<Path> files = Files.list(sub)) {
+            assertEquals(List.of(), files.toList(), "no partial file is left");
         }
     }
 
