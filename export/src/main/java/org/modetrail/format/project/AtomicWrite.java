@@ -33,6 +33,12 @@ public final class AtomicWrite {
         void writeTo(OutputStream out) throws IOException;
     }
 
+    /** Something that writes a whole file by its path (an encoder that opens the file itself). */
+    public interface FileContent {
+        /** Writes the complete content to {@code temp}, an existing empty file that may be overwritten. */
+        void writeTo(Path temp) throws IOException;
+    }
+
     private AtomicWrite() {
     }
 
@@ -40,9 +46,37 @@ public final class AtomicWrite {
         return target.resolveSibling(target.getFileName() + ".bak");
     }
 
-    /** Replaces {@code target} with what {@code content} writes, keeping no backup. */
+    /** Replaces {@code target} with the bytes {@code content} writes, keeping no backup. */
     public static void replace(Path target, Content content) throws IOException {
         replace(target, false, content, UnaryOperator.identity());
+    }
+
+    /**
+     * Replaces {@code target} with the file {@code content} writes under a temporary name in the same folder; the
+     * temporary file is forced to the disk and renamed over the target only when {@code content} returns normally.
+     * When it throws (an error, a cancellation) the temporary file is deleted and the target is left as it was.
+     */
+    public static void replaceWithFile(Path target, FileContent content) throws IOException {
+        Path absolute = target.toAbsolutePath();
+        Path folder = absolute.getParent();
+        Files.createDirectories(folder);
+        Path temp = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".part");
+        boolean moved = false;
+        try {
+            content.writeTo(temp);
+            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE)) {
+                channel.force(true);
+            }
+            copyPermissions(absolute, temp);
+            move(temp, absolute);
+            moved = true;
+            syncFolder(folder);
+            removeLeftovers(absolute);
+        } finally {
+            if (!moved) {
+                Files.deleteIfExists(temp);
+            }
+        }
     }
 
     /**
