@@ -39,9 +39,10 @@ import org.modetrail.model.WorldPoint;
  * calibration's RMS image error (or one given by the caller). The speed sigma carries the position errors along the
  * direction of motion d (variance sigma_px^2 |J^T d|^2 at sample j) through the derivative weights c_j as
  * independent errors: sigma_v = sqrt(sum c_j^2 sigma_d,j^2) (= sigma_p sqrt(sum c_j^2) when they are equal and the
- * errors isotropic); to first order that is the sigma of |v|. That is a lower bound: a calibration error shifts neighbouring positions alike (the errors
- * are correlated), which moves all positions together and scales speeds by a common factor that no smoothing
- * averages away, and box jitter of the tracker is not in sigma_px at all. The position sigma is that of the raw
+ * errors isotropic); to first order that is the sigma of |v|. The tracker's box jitter is added to it, estimated per run from the
+ * scatter of the raw positions about the smoothed ones ({@link #addTrackingJitter}). Even so the speed sigma is a
+ * lower bound: a calibration error shifts neighbouring positions alike (the errors are correlated), which moves
+ * all positions together and scales speeds by a common factor that no smoothing averages away. The position sigma is that of the raw
  * position, for the same reason (smoothing does not reduce a shared calibration error).
  */
 public final class GroundTrajectory {
@@ -177,6 +178,8 @@ public final class GroundTrajectory {
         double[] speedSigma = new double[n];
         double[] value = new double[n];
         double[] slope = new double[n];
+        double[] slopeSquares = new double[n];
+        int[] windowSamples = new int[n];
         SavitzkyGolay sg = new SavitzkyGolay(config.order());
         double half = config.windowS() / 2;
         int start = 0;
@@ -236,6 +239,12 @@ public final class GroundTrajectory {
                 sx[i] = ax;
                 sy[i] = ay;
                 speed[i] = Math.hypot(vx, vy);
+                double squares = 0;
+                for (int j = lo; j < hi; j++) {
+                    squares += slope[j - lo] * slope[j - lo];
+                }
+                slopeSquares[i] = squares;
+                windowSamples[i] = hi - lo;
                 double var = 0;
                 if (speed[i] > 0) {
                     double dx = vx / speed[i];
@@ -260,6 +269,7 @@ public final class GroundTrajectory {
                 }
                 speedSigma[i] = Math.sqrt(var);
             }
+            addTrackingJitter(start, end, x, y, sx, sy, slopeSquares, windowSamples, sigma, speedSigma, config);
             start = end;
         }
 
@@ -269,5 +279,41 @@ public final class GroundTrajectory {
                     speed[i], heading[i], sigma[i], speedSigma[i]));
         }
         return out;
+    }
+
+    /**
+     * Adds the tracker's box jitter to the position and speed sigmas of one run: the scatter of the raw positions about the
+     * smoothed ones estimates the per-axis noise of a position (the mean squared residual divided by 1 - (order + 1)
+     * / N, the share of a window's freedom the fit does not use, for windows of N samples; the usual residual
+     * variance correction of least squares, here with the mean window size), taken as independent from frame to
+     * frame and carried through the derivative weights like the calibration's share. Real motion the polynomial
+     * does not follow also shows up as residual, so this errs on the side of a larger sigma.
+     */
+    private static void addTrackingJitter(int start, int end, double[] x, double[] y, double[] sx, double[] sy,
+                                          double[] slopeSquares, int[] windowSamples, double[] positionSigma,
+                                          double[] speedSigma, TrajectoryConfig config) {
+        int m = 0;
+        double sum = 0;
+        double window = 0;
+        for (int i = start; i < end; i++) {
+            if (!Double.isNaN(speedSigma[i])) {
+                double rx = x[i] - sx[i];
+                double ry = y[i] - sy[i];
+                sum += rx * rx + ry * ry;
+                window += windowSamples[i];
+                m++;
+            }
+        }
+        if (m == 0) {
+            return;
+        }
+        double kept = 1 - (config.order() + 1.0) / (window / m);
+        double perAxisVariance = sum / (2.0 * m) / Math.max(kept, 1e-3);
+        for (int i = start; i < end; i++) {
+            positionSigma[i] = Math.sqrt(positionSigma[i] * positionSigma[i] + perAxisVariance);
+            if (!Double.isNaN(speedSigma[i])) {
+                speedSigma[i] = Math.sqrt(speedSigma[i] * speedSigma[i] + perAxisVariance * slopeSquares[i]);
+            }
+        }
     }
 }
