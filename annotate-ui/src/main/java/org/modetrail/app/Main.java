@@ -2,6 +2,10 @@ package org.modetrail.app;
 
 import org.modetrail.app.cli.BenchCommand;
 import org.modetrail.app.cli.CalibrateCommand;
+import org.modetrail.app.cli.ExportCommand;
+import org.modetrail.app.cli.ImportCommand;
+import org.modetrail.app.cli.OverlayCommand;
+import org.modetrail.app.cli.PlotCommand;
 import org.modetrail.app.cli.SummaryCommand;
 import org.modetrail.app.cli.DemoCommand;
 import org.modetrail.app.cli.ExitCodes;
@@ -19,7 +23,8 @@ import picocli.CommandLine.Command;
 /** The {@code modetrail} program: with no arguments it opens the editor, otherwise it runs one command. */
 @Command(name = "modetrail", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Turns video of moving objects into corrected, analysis-ready trajectories.",
-        subcommands = {TrackCommand.class, CalibrateCommand.class, SummaryCommand.class, InfoCommand.class, FrameCommand.class, DemoCommand.class, MakeDemoCommand.class,
+        subcommands = {TrackCommand.class, CalibrateCommand.class, SummaryCommand.class, ExportCommand.class,
+                ImportCommand.class, PlotCommand.class, OverlayCommand.class, InfoCommand.class, FrameCommand.class, DemoCommand.class, MakeDemoCommand.class,
                 BenchCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "With no command, the editor opens.",
                 "Exit codes: 0 done, 1 failed, 2 bad input (the message names the file and frame)."})

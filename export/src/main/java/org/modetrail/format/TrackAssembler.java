@@ -107,8 +107,9 @@ public final class TrackAssembler {
     }
 
     /**
-     * The box, checked to have a positive size and to lie inside the frame; a box reaching past an edge by no more
-     * than {@link #EDGE_TOLERANCE} is clipped to it.
+     * The box, checked to have a positive size and to overlap the frame. A box that reaches past an edge is kept as
+     * it is (the tracker's boxes do, as an object leaves the picture, and a round trip must give them back); one
+     * wholly outside the frame cannot belong to this video and is refused.
      */
     public Box checkedBox(double x, double y, double w, double h, Place place) throws ImportException {
         if (!Double.isFinite(x) || !Double.isFinite(y) || !(w > 0) || !(h > 0) || !Double.isFinite(w)
@@ -118,19 +119,11 @@ public final class TrackAssembler {
         }
         int width = video.width();
         int height = video.height();
-        double t = EDGE_TOLERANCE;
-        if (x < -t || y < -t || x + w > width + t || y + h > height + t) {
-            throw place.error(file, "the box " + x + "," + y + " " + w + "x" + h + " reaches outside the " + width
-                    + "x" + height + " frame; clip it to the frame or check that the file belongs to this video");
+        if (x >= width || y >= height || x + w <= 0 || y + h <= 0) {
+            throw place.error(file, "the box " + x + "," + y + " " + w + "x" + h + " lies wholly outside the "
+                    + width + "x" + height + " frame; check that the file belongs to this video");
         }
-        double x0 = Math.max(0, x);
-        double y0 = Math.max(0, y);
-        double x1 = Math.min(width, x + w);
-        double y1 = Math.min(height, y + h);
-        if (x0 == x && y0 == y && x1 == x + w && y1 == y + h) {
-            return new Box(x, y, w, h);
-        }
-        return new Box(x0, y0, x1 - x0, y1 - y0);
+        return new Box(x, y, w, h);
     }
 
     /** The project: classes as {@code classes} lists them (missing ones added with a palette colour). */

@@ -3,6 +3,7 @@ package org.modetrail.summary;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.IntToDoubleFunction;
 import org.modetrail.calibration.GroundSample;
 import org.modetrail.calibration.GroundTrajectory;
 import org.modetrail.calibration.TrajectoryConfig;
@@ -20,11 +21,19 @@ public final class GroundPaths {
 
     public static Map<Integer, GroundPath> of(Project project, double[] timeOfFrame, TrajectoryConfig config) {
         Map<Integer, GroundPath> out = new HashMap<>();
+        samples(project, GroundTrajectory.table(timeOfFrame), config).forEach((id, s) -> out.put(id, of(id, s)));
+        return out;
+    }
+
+    /** Every track's ground samples by track id; none without a calibration. */
+    public static Map<Integer, List<GroundSample>> samples(Project project, IntToDoubleFunction timeOfFrame,
+                                                           TrajectoryConfig config) {
+        Map<Integer, List<GroundSample>> out = new HashMap<>();
         if (project.site().calibration() == null) {
             return out;
         }
         for (Track t : project.tracks()) {
-            out.put(t.id(), of(t.id(), GroundTrajectory.of(project, t, GroundTrajectory.table(timeOfFrame), config)));
+            out.put(t.id(), GroundTrajectory.of(project, t, timeOfFrame, config));
         }
         return out;
     }

@@ -1,14 +1,9 @@
 package org.modetrail.app.cli;
 
 import java.io.IOException;
-import java.io.InputStream;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -80,11 +75,9 @@ public final class TrackCommand implements Callable<Integer> {
                     source.frameCount());
             Project keyed = projectOf(rows, source);
             PrintWriter err = spec.commandLine().getErr();
-            RunProgress progress = System.console() != null ? new ProgressLine(err) : RunProgress.NONE;
+            RunProgress progress = ProgressLine.forTerminal(err, "tracking");
             Project tracked = new TrackRunner().trackAll(source, keyed, progress, () -> false);
-            if (progress != RunProgress.NONE) {
-                err.println();
-            }
+            ProgressLine.finish(progress, err);
             TracksCsv.write(tracked, source.index()::timeSeconds, out);
             if (project != null) {
                 ProjectWriting.write(tracked, project);
@@ -124,58 +117,7 @@ public final class TrackCommand implements Callable<Integer> {
         for (Map.Entry<Integer, Map<Integer, FrameAnnotation>> e : frames.entrySet()) {
             tracks.add(new Track(e.getKey(), classOfTrack.get(e.getKey()), "", e.getValue()));
         }
-        VideoRef ref = new VideoRef(videoPathFor(project != null ? project : out), source.info().width(),
-                source.info().height(), source.frameCount(), fingerprint(video));
+        VideoRef ref = VideoRefs.of(video, source, project != null ? project : out);
         return new Project(ref, new ArrayList<>(classes.values()), tracks);
-    }
-
-    /** The video's path relative to the folder of the file that will refer to it, when there is one. */
-    private String videoPathFor(Path referring) {
-        Path base = referring.toAbsolutePath().getParent();
-        Path abs = video.toAbsolutePath().normalize();
-        try {
-            return base.relativize(abs).toString();
-        } catch (IllegalArgumentException e) {
-            return abs.toString();
-        }
-    }
-
-    /** Size and the SHA-256 of the first MiB: enough to notice a replaced file without reading an hour of video. */
-    static String fingerprint(Path file) throws IOException {
-        if (Files.isDirectory(file)) {
-            return "folder";
-        }
-        try (InputStream in = Files.newInputStream(file)) {
-            MessageDigest sha = MessageDigest.getInstance("SHA-256");
-            sha.update(in.readNBytes(1 << 20));
-            return "size:" + Files.size(file) + ";head-sha256:" + HexFormat.of().formatHex(sha.digest());
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
-        }
-    }
-
-    /** One line on stderr, rewritten in place: frames done, frames per second, time left. */
-    private static final class ProgressLine implements RunProgress {
-        private final PrintWriter err;
-        private final long startNanos = System.nanoTime();
-        private long lastPrint;
-
-        ProgressLine(PrintWriter err) {
-            this.err = err;
-        }
-
-        @Override
-        public void frames(long done, long total) {
-            long now = System.nanoTime();
-            if (now - lastPrint < 200_000_000L && done < total) {
-                return;
-            }
-            lastPrint = now;
-            double seconds = (now - startNanos) / 1e9;
-            double fps = seconds > 0 ? done / seconds : 0;
-            double left = fps > 0 ? (total - done) / fps : 0;
-            err.printf(Locale.ROOT, "\rtracking: %d/%d frames, %.0f frames/s, %.0f s left   ", done, total, fps, left);
-            err.flush();
-        }
     }
 }

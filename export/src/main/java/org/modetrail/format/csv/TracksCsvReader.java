@@ -28,6 +28,8 @@ import org.modetrail.model.VideoRef;
  */
 public final class TracksCsvReader {
     private static final List<String> COLUMNS = List.of(TracksCsv.HEADER.split(","));
+    /** The ground columns of a calibrated export: allowed, and ignored (they follow from the calibration). */
+    private static final List<String> GROUND = List.of(TracksCsv.GROUND_COLUMNS.split(","));
 
     private TracksCsvReader() {
     }
@@ -65,9 +67,10 @@ public final class TracksCsvReader {
         Map<String, Integer> columns = new HashMap<>();
         for (int i = 0; i < names.size(); i++) {
             String name = names.get(i).toLowerCase(Locale.ROOT);
-            if (!COLUMNS.contains(name)) {
+            if (!COLUMNS.contains(name) && !GROUND.contains(name)) {
                 throw new ImportException(file, 1, 0, null, "unknown column '" + names.get(i) + "'; a tracks file"
-                        + " has the columns " + TracksCsv.HEADER);
+                        + " has the columns " + TracksCsv.HEADER + " and, from a calibrated project, "
+                        + TracksCsv.GROUND_COLUMNS);
             }
             if (columns.put(name, i) != null) {
                 throw new ImportException(file, 1, 0, null, "column '" + name + "' appears twice");

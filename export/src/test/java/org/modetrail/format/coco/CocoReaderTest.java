@@ -97,10 +97,10 @@ class CocoReaderTest {
         assertEquals("/annotations/1", e.jsonPath());
         assertTrue(e.getMessage().contains("category_id 9 is not in \"categories\""), e.getMessage());
 
-        e = refused(ann(GOOD.replace("[11, 10, 20, 20]", "[630, 10, 20, 20]")));
+        e = refused(ann(GOOD.replace("[11, 10, 20, 20]", "[650, 10, 20, 20]")));
         assertEquals(10, e.line());
         assertEquals("/annotations/1/bbox", e.jsonPath());
-        assertTrue(e.getMessage().contains("reaches outside the 640x480 frame"), e.getMessage());
+        assertTrue(e.getMessage().contains("lies wholly outside the 640x480 frame"), e.getMessage());
 
         e = refused(ann(GOOD.replace("[11, 10, 20, 20]", "[11, 10, 20]")));
         assertEquals(10, e.line());

@@ -75,9 +75,9 @@ class TracksCsvReaderTest {
         assertEquals(3, e.line());
         assertTrue(e.getMessage().contains("frame 300 is beyond the video"), e.getMessage());
 
-        e = refused(H + "2,car,5,0.2,630,10,20,20,tracked,0.5\n");
+        e = refused(H + "2,car,5,0.2,650,10,20,20,tracked,0.5\n");
         assertEquals(2, e.line());
-        assertTrue(e.getMessage().contains("reaches outside the 640x480 frame"), e.getMessage());
+        assertTrue(e.getMessage().contains("lies wholly outside the 640x480 frame"), e.getMessage());
 
         e = refused(H + OK + "\n" + OK);
         assertEquals(4, e.line());
@@ -86,6 +86,17 @@ class TracksCsvReaderTest {
         e = refused(H + OK + "1,bus,1,0.04,10,10,20,20,tracked,0.5\n");
         assertEquals(3, e.line());
         assertTrue(e.getMessage().contains("has class 'bus' here but 'car' at line 2"), e.getMessage());
+    }
+
+    @Test
+    void boxesReachingPastTheEdgeAndGroundColumnsComeBackAsWritten() throws Exception {
+        // An object leaving the picture: the tracker's box reaches past the right edge; a calibrated export adds
+        // the ground columns, which an import ignores (they follow from the calibration).
+        Path f = dir.resolve("edge.csv");
+        Files.writeString(f, TracksCsv.HEADER + "," + TracksCsv.GROUND_COLUMNS + "\n"
+                + "1,car,5,0.2,630.5,10,20,20,tracked,0.5,1.5,2.5,3.1,0.2,0.05,90\n");
+        Project p = TracksCsvReader.read(f, TrackSamples.VIDEO);
+        assertEquals(new org.modetrail.model.Box(630.5, 10, 20, 20), p.tracks().get(0).at(5).orElseThrow().box());
     }
 
     @Test

@@ -132,7 +132,7 @@ class MotFormatTest {
 
         e = refused(OK + "\n" + "2,1,-30,10,20,20,1,-1,-1,-1\n");
         assertEquals(3, e.line());
-        assertTrue(e.getMessage().contains("reaches outside the 640x480 frame"), e.getMessage());
+        assertTrue(e.getMessage().contains("lies wholly outside the 640x480 frame"), e.getMessage());
 
         e = refused(OK + OK);
         assertEquals(2, e.line());

@@ -1,0 +1,112 @@
+package org.modetrail.app.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.function.IntToDoubleFunction;
+
+import org.modetrail.calibration.GroundSample;
+import org.modetrail.calibration.TrajectoryConfig;
+import org.modetrail.model.Project;
+import org.modetrail.picture.ColourBy;
+import org.modetrail.picture.PlotFormat;
+import org.modetrail.picture.PlotOptions;
+import org.modetrail.picture.Plots;
+import org.modetrail.picture.ProjectSeries;
+import org.modetrail.picture.TrajectoryPoint;
+import org.modetrail.summary.GroundPaths;
+import org.modetrail.video.VideoSource;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code modetrail plot PROJECT.json --out DIR [--format png|svg|both] [--colour class|track]}. */
+@Command(name = "plot", mixinStandardHelpOptions = true,
+        description = {"Draws each track's path on the image (pixels, y down) and, when the ground is calibrated, "
+                + "its path on the ground (metres) and its speed over time with one standard uncertainty: "
+                + "trajectory-image, trajectory-ground and speed, as PNG and SVG files in DIR."})
+public final class PlotCommand implements Callable<Integer> {
+    /** What the files are called in DIR, without the extension. */
+    static final String IMAGE = "trajectory-image";
+    static final String GROUND = "trajectory-ground";
+    static final String SPEED = "speed";
+
+    @Parameters(index = "0", paramLabel = "PROJECT.json", description = "the project to plot")
+    Path projectFile;
+
+    @Option(names = "--out", required = true, paramLabel = "DIR", description = "the folder for the pictures")
+    Path out;
+
+    @Option(names = "--format", defaultValue = "both", paramLabel = "png|svg|both",
+            description = "picture format; default ${DEFAULT-VALUE}")
+    String format;
+
+    @Option(names = "--colour", defaultValue = "class", paramLabel = "class|track",
+            description = "colour by class, or one colour per track; default ${DEFAULT-VALUE}")
+    String colour;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter stdout = spec.commandLine().getOut();
+        List<PlotFormat> formats = switch (format.toLowerCase(java.util.Locale.ROOT)) {
+            case "png" -> List.of(PlotFormat.PNG);
+            case "svg" -> List.of(PlotFormat.SVG);
+            case "both" -> List.of(PlotFormat.PNG, PlotFormat.SVG);
+            default -> throw new BadInputException("--format is png, svg or both, not '" + format + "'");
+        };
+        ColourBy by = switch (colour.toLowerCase(java.util.Locale.ROOT)) {
+            case "class" -> ColourBy.CLASS;
+            case "track" -> ColourBy.TRACK;
+            default -> throw new BadInputException("--colour is class or track, not '" + colour + "'");
+        };
+        Project project = ProjectOpening.read(projectFile, err);
+        IntToDoubleFunction time;
+        try (VideoSource video = ProjectOpening.openVideo(project, projectFile)) {
+            double[] t = ProjectOpening.frameTimes(video);
+            time = n -> t[n];
+        }
+        Files.createDirectories(out);
+        String name = projectFile.getFileName().toString().replaceFirst("\\.json$", "");
+        List<Path> written = new ArrayList<>();
+        for (PlotFormat f : formats) {
+            String ext = "." + f.name().toLowerCase(java.util.Locale.ROOT);
+            Path image = out.resolve(IMAGE + ext);
+            Plots.writeImageTrajectory(ProjectSeries.imagePlane(project, time, TrajectoryPoint.CONTACT, by),
+                    project.video().width(), project.video().height(),
+                    PlotOptions.defaults().withTitle(name + ": paths on the image"), f, image);
+            written.add(image);
+            if (project.site().calibration() != null) {
+                Map<Integer, List<GroundSample>> ground = GroundPaths.samples(project, time,
+                        TrajectoryConfig.defaults());
+                Path groundFile = out.resolve(GROUND + ext);
+                Plots.writeGroundTrajectory(ProjectSeries.groundPlane(project, ground, by),
+                        PlotOptions.defaults().withTitle(name + ": paths on the ground"), f, groundFile);
+                Path speedFile = out.resolve(SPEED + ext);
+                Plots.writeSpeed(ProjectSeries.speeds(project, ground, by),
+                        PlotOptions.defaults().withTitle(name + ": speed (band: one standard uncertainty)"), f,
+                        speedFile);
+                written.add(groundFile);
+                written.add(speedFile);
+            }
+        }
+        for (Path p : written) {
+            stdout.println("wrote " + p);
+        }
+        if (project.site().calibration() == null) {
+            stdout.println("(no ground calibration: image paths only; run `modetrail calibrate` for ground paths "
+                    + "and speeds)");
+        }
+        return ExitCodes.OK;
+    }
+}
