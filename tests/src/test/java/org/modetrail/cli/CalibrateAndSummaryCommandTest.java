@@ -36,65 +36,23 @@ import picocli.CommandLine;
  * speed estimate, not the tracker.
  */
 class CalibrateAndSummaryCommandTest {
-    private static final Path CLIP = Path.of("..", "clips", "road.mp4");
-    private static final Path TRUTH = Path.of("..", "clips", "road-truth.csv");
-    private static final Path CALIBRATION = Path.of("..", "clips", "road-calibration.csv");
+    private static final Path TRUTH = RoadFixture.TRUTH;
+    private static final Path CALIBRATION = RoadFixture.CALIBRATION;
 
     @TempDir
     Path dir;
     Path projectFile;
     Path points;
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        CommandLine cli = Main.commandLine();
-        StringWriter err = new StringWriter();
-        StringWriter out = new StringWriter();
-        cli.setErr(new PrintWriter(err, true));
-        cli.setOut(new PrintWriter(out, true));
-        return new Run(cli.execute(args), out.toString(), err.toString());
-    }
-
-    /** The truth of car 1 (13.9 m/s) and the truck 3 (11 m/s), fully visible frames only, as keyframes. */
     @BeforeEach
     void makeProjectAndPoints() throws Exception {
-        Map<Integer, Map<Integer, FrameAnnotation>> frames = new TreeMap<>();
-        Map<Integer, String> classes = new TreeMap<>();
-        List<String> lines = Files.readAllLines(TRUTH);
-        for (String line : lines.subList(1, lines.size())) {
-            String[] f = line.split(",");
-            int id = Integer.parseInt(f[0]);
-            if ((id != 1 && id != 3) || Double.parseDouble(f[8]) < 1) {
-                continue;
-            }
-            int frame = Integer.parseInt(f[2]);
-            classes.put(id, f[1]);
-            frames.computeIfAbsent(id, k -> new TreeMap<>()).put(frame, FrameAnnotation.keyframe(frame,
-                    new Box(Double.parseDouble(f[4]), Double.parseDouble(f[5]), Double.parseDouble(f[6]),
-                            Double.parseDouble(f[7]))));
-        }
-        List<Track> tracks = new ArrayList<>();
-        frames.forEach((id, f) -> tracks.add(new Track(id, classes.get(id), "", f)));
-        Project p = new Project(new VideoRef(CLIP.toAbsolutePath().normalize().toString(), 960, 540, 450, ""),
-                List.of(new ObjectClass("car", 0xD55E00), new ObjectClass("truck", 0x0072B2)), tracks);
-        projectFile = dir.resolve("road.json");
-        ProjectFile.write(p, projectFile);
-        StringBuilder csv = new StringBuilder("image_x,image_y,world_x_m,world_y_m\n");
-        for (String line : Files.readAllLines(CALIBRATION)) {
-            String[] f = line.split(",", -1);
-            if (f[0].equals("point")) {
-                csv.append(f[3]).append(',').append(f[4]).append(',').append(f[5]).append(',').append(f[6])
-                        .append('\n');
-            }
-        }
-        points = Files.writeString(dir.resolve("points.csv"), csv);
+        projectFile = RoadFixture.truthProject(dir, 1, 3);
+        points = RoadFixture.points(dir);
     }
 
     @Test
     void calibrationStoresTheFitAndTheSummaryGivesTheSpeedsOfTheRoadUsers() throws Exception {
-        Run c = run("calibrate", projectFile.toString(), "--points", points.toString());
+        RoadFixture.Run c = RoadFixture.run("calibrate", projectFile.toString(), "--points", points.toString());
         assertEquals(0, c.code(), c.err());
         // The points are exact projections (clips/README.md), so the fit reproduces them to rounding.
         assertTrue(c.out().contains("rms error over 30 of 30 points"), c.out());
@@ -104,7 +62,7 @@ class CalibrateAndSummaryCommandTest {
         assertTrue(Files.exists(ProjectFile.backupFile(projectFile)), "the uncalibrated version is kept as .bak");
 
         Path out = dir.resolve("summary.csv");
-        Run s = run("summary", projectFile.toString(), "--out", out.toString());
+        RoadFixture.Run s = RoadFixture.run("summary", projectFile.toString(), "--out", out.toString());
         assertEquals(0, s.code(), s.err());
         assertTrue(s.out().contains("Caution:"), s.out());
         List<String> rows = Files.readAllLines(out);
@@ -168,16 +126,16 @@ class CalibrateAndSummaryCommandTest {
         byte[] before = Files.readAllBytes(projectFile);
         Path three = Files.writeString(dir.resolve("three.csv"),
                 "image_x,image_y,world_x_m,world_y_m\n1,1,0,0\n100,1,1,0\n100,100,1,1\n");
-        Run r = run("calibrate", projectFile.toString(), "--points", three.toString());
+        RoadFixture.Run r = RoadFixture.run("calibrate", projectFile.toString(), "--points", three.toString());
         assertEquals(2, r.code(), r.err());
         assertTrue(r.err().contains("three.csv") && r.err().contains("at least 4"), r.err());
         Path malformed = Files.writeString(dir.resolve("bad.csv"),
                 "image_x,image_y,world_x_m,world_y_m\n1,1,0,0\n100,1,one,0\n");
-        Run m = run("calibrate", projectFile.toString(), "--points", malformed.toString());
+        RoadFixture.Run m = RoadFixture.run("calibrate", projectFile.toString(), "--points", malformed.toString());
         assertEquals(2, m.code(), m.err());
         assertTrue(m.err().contains("bad.csv") && m.err().contains("line 3"), m.err());
         assertEquals(new String(before), Files.readString(projectFile), "the project is unchanged");
-        Run missing = run("summary", dir.resolve("none.json").toString());
+        RoadFixture.Run missing = RoadFixture.run("summary", dir.resolve("none.json").toString());
         assertEquals(2, missing.code());
         assertTrue(missing.err().contains("none.json"), missing.err());
     }
