@@ -83,8 +83,49 @@ class CalibrateAndSummaryCommandTest {
         assertEquals(11.0, truck, 0.10 * 11.0, rows.get(2));
     }
 
-    /** Displacement over time of the bottom centres of the true boxes of car 1 and truck 3, in the exact camera. */
-    private static double[] contactSpeeds() throws Exception {
+    @Test
+    void zonesAndCountingLinesFromAFileGiveTimesAndCrossingsWithDirection() throws Exception {
+        assertEquals(0, RoadFixture.run("calibrate", projectFile.toString(), "--points", points.toString()).code());
+        // Drawn where the generator's camera sees the ground (clips/README.md): a counting line across the road at
+        // y = 30 m and the zebra crossing, y 45 to 48 m, as a zone.
+        Homography groundToImage = new Homography(generatorHomography());
+        PixelPoint a = toImage(groundToImage, -1, 30);
+        PixelPoint b = toImage(groundToImage, 15, 30);
+        String zones = "{\"zones\": [{\"name\": \"zebra\", \"polygon\": [" + pair(toImage(groundToImage, 0, 45))
+                + ", " + pair(toImage(groundToImage, 14, 45)) + ", " + pair(toImage(groundToImage, 14, 48)) + ", "
+                + pair(toImage(groundToImage, 0, 48)) + "]}],\n \"lines\": [{\"name\": \"y30\", \"from\": "
+                + pair(a) + ", \"to\": " + pair(b) + "}]}";
+        Path zonesFile = Files.writeString(dir.resolve("zones.json"), zones);
+        Path out = dir.resolve("summary.csv");
+        RoadFixture.Run s = RoadFixture.run("summary", projectFile.toString(), "--zones", zonesFile.toString(),
+                "--out", out.toString());
+        assertEquals(0, s.code(), s.err());
+        List<String> rows = Files.readAllLines(out);
+        assertTrue(rows.get(0).endsWith(",zone:zebra:s,line:y30:left_to_right,line:y30:right_to_left"), rows.get(0));
+        String[] car = rows.get(1).split(",");
+        String[] truck = rows.get(2).split(",");
+        // Car 1 drives away (+y) and the truck towards the camera: one crossing each, in opposite directions.
+        assertEquals(1, Integer.parseInt(car[12]) + Integer.parseInt(car[13]), rows.get(1));
+        assertEquals(1, Integer.parseInt(truck[12]) + Integer.parseInt(truck[13]), rows.get(2));
+        assertEquals(car[12], truck[13], "opposite directions");
+        // 3 m of crossing at 13.9 m/s is 0.22 s, 5.5 frames; within 3 frames either way for the sliding contact.
+        assertEquals(0.22, Double.parseDouble(car[11]), 0.12, rows.get(1));
+        Path broken = Files.writeString(dir.resolve("broken.json"), zones.replace("\"to\"", "\"towards\""));
+        RoadFixture.Run bad = RoadFixture.run("summary", projectFile.toString(), "--zones", broken.toString());
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("broken.json") && bad.err().contains("line 2"), bad.err());
+    }
+
+    private static PixelPoint toImage(Homography groundToImage, double x, double y) {
+        WorldPoint p = groundToImage.toWorld(new PixelPoint(x, y));
+        return new PixelPoint(p.x(), p.y());
+    }
+
+    private static String pair(PixelPoint p) {
+        return "[" + p.x() + ", " + p.y() + "]";
+    }
+
+    private static double[] generatorHomography() throws Exception {
         double[] h = new double[9];
         for (String line : Files.readAllLines(CALIBRATION)) {
             String[] f = line.split(",", -1);
@@ -92,7 +133,12 @@ class CalibrateAndSummaryCommandTest {
                 h[3 * (f[1].charAt(1) - '1') + (f[1].charAt(2) - '1')] = Double.parseDouble(f[2]);
             }
         }
-        Homography imageToGround = new Homography(h).inverse();
+        return h;
+    }
+
+    /** Displacement over time of the bottom centres of the true boxes of car 1 and truck 3, in the exact camera. */
+    private static double[] contactSpeeds() throws Exception {
+        Homography imageToGround = new Homography(generatorHomography()).inverse();
         double[] speed = new double[2];
         int k = 0;
         for (int id : new int[] {1, 3}) {

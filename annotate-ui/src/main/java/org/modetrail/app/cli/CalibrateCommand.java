@@ -9,8 +9,10 @@ import java.util.concurrent.Callable;
 import org.modetrail.calibration.HomographyFit;
 import org.modetrail.format.csv.CalibrationPointsCsv;
 import org.modetrail.format.csv.CsvFormatException;
+import org.modetrail.model.ContactPoint;
 import org.modetrail.model.GroundCalibration;
 import org.modetrail.model.GroundPoint;
+import org.modetrail.model.ObjectClass;
 import org.modetrail.model.PointError;
 import org.modetrail.model.Project;
 import org.modetrail.summary.MeasurementCaution;
@@ -38,6 +40,12 @@ public final class CalibrateCommand implements Callable<Integer> {
 
     @Option(names = "--points", required = true, paramLabel = "POINTS.csv", description = "the point pairs")
     Path points;
+
+    @Option(names = "--contact", paramLabel = "CLASS=FX,FY",
+            description = "where objects of CLASS touch the ground, as fractions of their box's width and height "
+                    + "from its top-left corner (default 0.5,1, the bottom centre; 0.5,0.5 for animals or particles "
+                    + "seen from straight above); may be repeated")
+    java.util.List<String> contacts = new java.util.ArrayList<>();
 
     @Spec
     CommandSpec spec;
@@ -72,9 +80,40 @@ public final class CalibrateCommand implements Callable<Integer> {
         for (String w : c.warnings()) {
             out.println("warning: " + w);
         }
-        ProjectWriting.write(project.withSite(project.site().withCalibration(c)), projectFile);
+        Project calibrated = withContacts(project.withSite(project.site().withCalibration(c)), out);
+        ProjectWriting.write(calibrated, projectFile);
         out.println("calibration stored in " + projectFile);
         out.println("Caution: " + MeasurementCaution.TEXT);
         return ExitCodes.OK;
+    }
+
+    /** The project with the --contact points set on their classes. */
+    private Project withContacts(Project p, PrintWriter out) throws BadInputException {
+        Project result = p;
+        for (String spec : contacts) {
+            int eq = spec.lastIndexOf('=');
+            String[] xy = eq < 0 ? new String[0] : spec.substring(eq + 1).split(",");
+            if (eq <= 0 || xy.length != 2) {
+                throw new BadInputException("--contact " + spec + ": write it CLASS=FX,FY, like car=0.5,1");
+            }
+            String name = spec.substring(0, eq).strip();
+            ObjectClass k = result.objectClass(name).orElse(null);
+            if (k == null) {
+                throw new BadInputException("--contact " + spec + ": the project has no class '" + name
+                        + "'; its classes are " + result.classes().stream().map(ObjectClass::name).toList());
+            }
+            ContactPoint point;
+            try {
+                point = new ContactPoint(Double.parseDouble(xy[0].strip()), Double.parseDouble(xy[1].strip()));
+            } catch (IllegalArgumentException e) {
+                throw new BadInputException("--contact " + spec + ": " + e.getMessage(), e);
+            }
+            List<ObjectClass> classes = new java.util.ArrayList<>(result.classes());
+            classes.set(classes.indexOf(k), k.withContact(point));
+            result = new Project(result.video(), classes, result.tracks(), result.site());
+            out.printf(Locale.ROOT, "class %s touches the ground at %.3f, %.3f of its box%n", name,
+                    point.alongWidth(), point.alongHeight());
+        }
+        return result;
     }
 }
