@@ -41,6 +41,15 @@ public final class History {
         return current;
     }
 
+    /**
+     * Makes {@code next} current without a step of its own: for results that complete the current step, such as
+     * the tracking an edit started, so that one undo takes back the edit and its tracking together.
+     */
+    public Project amend(Project next) {
+        current = next;
+        return current;
+    }
+
     public boolean canUndo() {
         return !undo.isEmpty();
     }
