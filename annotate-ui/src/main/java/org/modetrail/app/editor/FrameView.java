@@ -559,6 +559,12 @@ public class FrameView extends JComponent {
                     ? RenderingHints.VALUE_INTERPOLATION_NEAREST_NEIGHBOR
                     : RenderingHints.VALUE_INTERPOLATION_BILINEAR);
             g2.drawImage(image, transform.toAffine(), null);
+            // A thin line round the frame, so its edge shows where the footage is as dark or light as the theme.
+            Color edge = UIManager.getColor("Component.borderColor");
+            g2.setColor(edge != null ? edge : Color.GRAY);
+            g2.drawRect((int) Math.floor(transform.offsetX()) - 1, (int) Math.floor(transform.offsetY()) - 1,
+                    (int) Math.ceil(image.getWidth() * transform.scale()) + 1,
+                    (int) Math.ceil(image.getHeight() * transform.scale()) + 1);
             g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             g2.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
@@ -680,6 +686,9 @@ public class FrameView extends JComponent {
      */
     private void paintTag(Graphics2D g, FontMetrics fm, Painted p, Box b, String text) {
         transform.toView(b, rect);
+        if (!rect.intersects(0, 0, getWidth(), getHeight())) {
+            return; // the box is out of view: so is its tag
+        }
         int pad = 3;
         int tw = fm.stringWidth(text) + 2 * pad;
         int th = fm.getAscent() + fm.getDescent() + 2;
