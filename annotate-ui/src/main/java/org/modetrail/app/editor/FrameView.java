@@ -381,23 +381,29 @@ public class FrameView extends JComponent {
             if (!dragging && (Math.abs(x - pressX) >= DRAG_THRESHOLD || Math.abs(y - pressY) >= DRAG_THRESHOLD)) {
                 dragging = true;
             }
+            Box before = preview != null ? preview.box() : drag == Drag.DRAW ? null : dragStart;
             switch (drag) {
                 case PAN -> {
                     transform = transform.panBy(x - lastX, y - lastY);
                     following = false;
                     clampTransform();
+                    repaint();
                 }
-                case DRAW -> preview = dragging ? drawn(x, y) : null;
-                case MOVE, RESIZE -> preview = dragging ? handles.resize(dragStart, grip,
-                        (x - pressX) / transform.scale(), (y - pressY) / transform.scale(),
-                        image.getWidth(), image.getHeight()) : null;
+                case DRAW -> {
+                    preview = dragging ? drawn(x, y) : null;
+                    repaintAround(before, preview);
+                }
+                case MOVE, RESIZE -> {
+                    preview = dragging ? handles.resize(dragStart, grip, (x - pressX) / transform.scale(),
+                            (y - pressY) / transform.scale(), image.getWidth(), image.getHeight()) : null;
+                    repaintAround(before, preview);
+                }
                 default -> {
                     return;
                 }
             }
             lastX = x;
             lastY = y;
-            repaint();
         }
 
         @Override
@@ -454,6 +460,36 @@ public class FrameView extends JComponent {
                 zoomBy(Math.pow(WHEEL_STEP, -notches), e.getX(), e.getY());
             }
         }
+    }
+
+    /**
+     * Repaints only where a box being drawn or edited was and now is, with room for its strokes, grips and tag: on a
+     * large frame a drag then redraws a small part of it per mouse event.
+     */
+    private void repaintAround(Box before, BoxHandles.Adjusted now) {
+        Box after = now == null ? null : now.box();
+        if (before == null && after == null) {
+            return;
+        }
+        Rectangle2D.Double area = null;
+        for (Box b : new Box[] {before, after}) {
+            if (b == null) {
+                continue;
+            }
+            transform.toView(b, rect);
+            int reach = GRIP_SIZE + 8;
+            int tagHeight = 3 * (tagFont.getSize() + 8); // room for a tag above, below or inside the box
+            int tagWidth = 24 * tagFont.getSize();
+            double left = Math.min(rect.x - reach, getWidth() - tagWidth); // tags near the right edge shift left
+            Rectangle2D.Double r = new Rectangle2D.Double(left, rect.y - tagHeight,
+                    Math.max(rect.x + rect.width + reach, left + tagWidth) - left, rect.height + 2 * tagHeight);
+            if (area == null) {
+                area = r;
+            } else {
+                area.add(r);
+            }
+        }
+        repaint(area.getBounds());
     }
 
     private void startEdit(int trackId, Box box, BoxHandles.Grip g) {
@@ -555,10 +591,16 @@ public class FrameView extends JComponent {
             if (image == null) {
                 return;
             }
-            g2.setRenderingHint(RenderingHints.KEY_INTERPOLATION, transform.scale() >= CRISP_FROM
-                    ? RenderingHints.VALUE_INTERPOLATION_NEAREST_NEIGHBOR
-                    : RenderingHints.VALUE_INTERPOLATION_BILINEAR);
-            g2.drawImage(image, transform.toAffine(), null);
+            double s = transform.scale();
+            if (s == 1 && transform.offsetX() == Math.rint(transform.offsetX())
+                    && transform.offsetY() == Math.rint(transform.offsetY())) {
+                g2.drawImage(image, (int) transform.offsetX(), (int) transform.offsetY(), null); // a plain copy
+            } else {
+                g2.setRenderingHint(RenderingHints.KEY_INTERPOLATION, s >= CRISP_FROM
+                        ? RenderingHints.VALUE_INTERPOLATION_NEAREST_NEIGHBOR
+                        : RenderingHints.VALUE_INTERPOLATION_BILINEAR);
+                g2.drawImage(image, transform.toAffine(), null);
+            }
             // A thin line round the frame, so its edge shows where the footage is as dark or light as the theme.
             Color edge = UIManager.getColor("Component.borderColor");
             g2.setColor(edge != null ? edge : Color.GRAY);
