@@ -105,7 +105,6 @@ public class FrameView extends JComponent {
 
     private BufferedImage image;
     private int frame = -1;
-    private Project project;
     private final List<Painted> painted = new ArrayList<>();
     private Integer selected;
     private ViewTransform transform = ViewTransform.IDENTITY;
@@ -221,7 +220,6 @@ public class FrameView extends JComponent {
 
     /** The tracks to draw (null for none). */
     public void setProject(Project p) {
-        project = p;
         painted.clear();
         if (p != null) {
             for (Track t : p.tracks()) {
@@ -352,14 +350,15 @@ public class FrameView extends JComponent {
                 return;
             }
             FrameAnnotation sel = selected == null ? null : visibleAt(selected);
+            Painted under = trackAt(pressX, pressY);
             if (sel != null) {
                 BoxHandles.Grip g = handles.hit(sel.box(), transform, pressX, pressY);
-                if (g != BoxHandles.Grip.NONE) {
+                // The selected box's grips come first; inside it, a smaller box under the pointer is chosen.
+                if (g.resizes() || (g == BoxHandles.Grip.INSIDE && under.track().id() == selected)) {
                     startEdit(selected, sel.box(), g);
                     return;
                 }
             }
-            Painted under = trackAt(pressX, pressY);
             if (under != null) {
                 int id = under.track().id();
                 selected = id;
@@ -661,6 +660,17 @@ public class FrameView extends JComponent {
         tags.clear();
         g.setFont(tagFont);
         FontMetrics fm = g.getFontMetrics();
+        String note = null;
+        Rectangle2D.Double noteTag = null;
+        if (chosen != null && chosenBox == null) {
+            // Placed first so the other tags keep clear of it; drawn last.
+            FrameAnnotation a = chosen.track().frames().get(frame);
+            Presence mark = a == null ? null : a.presence();
+            note = chosen.label() + " · " + (mark == Presence.HIDDEN ? "hidden here"
+                    : mark == Presence.ABSENT ? "absent here" : "no box on this frame");
+            noteTag = new Rectangle2D.Double(8, 8, fm.stringWidth(note) + 8, fm.getAscent() + fm.getDescent() + 2);
+            tags.add(noteTag);
+        }
         for (Painted p : painted) {
             if (p == chosen) {
                 continue;
@@ -672,17 +682,11 @@ public class FrameView extends JComponent {
                 paintTag(g, fm, p, b, p.label());
             }
         }
-        if (chosen != null) {
-            if (chosenBox != null) {
-                paintTag(g, fm, chosen, chosenBox, chosen.label());
-                paintGrips(g, chosen, chosenBox);
-            } else {
-                FrameAnnotation a = chosen.track().frames().get(frame);
-                Presence mark = a == null ? null : a.presence();
-                String where = mark == Presence.HIDDEN ? "hidden here" : mark == Presence.ABSENT ? "absent here"
-                        : "no box on this frame";
-                paintNote(g, fm, chosen, chosen.label() + " · " + where);
-            }
+        if (chosenBox != null) {
+            paintTag(g, fm, chosen, chosenBox, chosen.label());
+            paintGrips(g, chosen, chosenBox);
+        } else if (noteTag != null) {
+            drawTag(g, fm, chosen, noteTag, note, 4);
         }
     }
 
@@ -768,14 +772,6 @@ public class FrameView extends JComponent {
         g.draw(grab);
         g.setColor(p.text());
         g.drawString(text, (float) (tag.x + pad), (float) (tag.y + 1 + fm.getAscent()));
-    }
-
-    /** A note in the view's top-left corner, for a selected track without a box on this frame. */
-    private void paintNote(Graphics2D g, FontMetrics fm, Painted p, String text) {
-        int pad = 4;
-        Rectangle2D.Double tag = new Rectangle2D.Double(8, 8, fm.stringWidth(text) + 2 * pad,
-                fm.getAscent() + fm.getDescent() + 2);
-        drawTag(g, fm, p, tag, text, pad);
     }
 
     private boolean free(Rectangle2D r) {

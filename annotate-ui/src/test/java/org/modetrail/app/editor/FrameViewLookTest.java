@@ -37,7 +37,7 @@ import org.modetrail.video.VideoSource;
 /**
  * Pictures of the canvas on a frame of the arena clip, for a person to look at: boxes of every source and three
  * classes (light, mid and dark colours), a selected box with its grips, in FlatLaf's light and dark themes, and a
- * zoomed-in view with a box being drawn. Written into the folder named by the system property
+ * zoomed-in view with a box being drawn, and the note shown when the selected track is hidden on the frame. Written into the folder named by the system property
  * {@code modetrail.lookDir} and skipped without it:
  * {@code mvn -pl tracker,export,annotate-ui test -Dtest=FrameViewLookTest -Dmodetrail.lookDir=/tmp}.
  */
@@ -93,9 +93,11 @@ class FrameViewLookTest {
         BufferedImage light = picture(frame, false, false);
         BufferedImage dark = picture(frame, true, false);
         BufferedImage zoom = picture(frame, true, true);
+        BufferedImage note = picture(frame, false, false, 4);
         ImageIO.write(light, "png", look.resolve("canvas-light.png").toFile());
         ImageIO.write(dark, "png", look.resolve("canvas-dark.png").toFile());
         ImageIO.write(zoom, "png", look.resolve("canvas-zoom.png").toFile());
+        ImageIO.write(note, "png", look.resolve("canvas-hidden-selected.png").toFile());
         // The empty space beside the frame follows the theme: light on the light one, dark on the dark one.
         assertTrue(lightness(light.getRGB(5, 5)) > 150, "light theme background " + lightness(light.getRGB(5, 5)));
         assertTrue(lightness(dark.getRGB(5, 5)) < 90, "dark theme background " + lightness(dark.getRGB(5, 5)));
@@ -110,6 +112,11 @@ class FrameViewLookTest {
     }
 
     private static BufferedImage picture(BufferedImage frame, boolean darkTheme, boolean zoomed) throws Exception {
+        return picture(frame, darkTheme, zoomed, 1);
+    }
+
+    private static BufferedImage picture(BufferedImage frame, boolean darkTheme, boolean zoomed, int selected)
+            throws Exception {
         AtomicReference<BufferedImage> out = new AtomicReference<>();
         SwingUtilities.invokeAndWait(() -> {
             if (darkTheme) {
@@ -121,7 +128,7 @@ class FrameViewLookTest {
             view.setSize(960, 640);
             view.showFrame(FRAME, frame);
             view.setProject(project());
-            view.setSelectedTrack(1);
+            view.setSelectedTrack(selected);
             if (zoomed) {
                 // 4x about the selected animal, then a box being drawn beside it (pressed and dragged, not released).
                 ViewTransform fit = view.transform();

@@ -66,14 +66,18 @@ class FrameViewTest {
         };
     }
 
-    /** Track 1 with a keyframe at (80, 80) 120x96 on frame 0, track 2 hidden there, track 3 interpolated. */
+    /**
+     * Track 1 with a keyframe at (80, 80) 120x96 on frame 0, track 2 hidden there, track 3 interpolated at (400, 300)
+     * 80x60, track 4 a small keyframe (150, 90) 20x20 inside track 1's box.
+     */
     static Project project() {
         VideoRef video = new VideoRef("clip.mp4", 640, 480, 10, "");
         Track one = Track.startingWith(1, "animal", FrameAnnotation.keyframe(0, new Box(80, 80, 120, 96)));
         Track two = Track.startingWith(2, "animal", FrameAnnotation.markedBy(0, Presence.HIDDEN));
         Track three = new Track(3, "robot", "", Map.of(0, FrameAnnotation.interpolated(0, new Box(400, 300, 80, 60))));
+        Track four = Track.startingWith(4, "robot", FrameAnnotation.keyframe(0, new Box(150, 90, 20, 20)));
         return new Project(video, List.of(new ObjectClass("animal", RED), new ObjectClass("robot", 0x20C0F0)),
-                List.of(one, two, three));
+                List.of(one, two, three, four));
     }
 
     static BufferedImage grey(int w, int h) {
@@ -155,6 +159,16 @@ class FrameViewTest {
         assertNull(view.selectedTrack());
         click(700, 100); // nothing selected: nothing to say
         assertEquals(List.of("selected 1", "selected null"), heard);
+    }
+
+    @Test
+    void aSmallBoxInsideTheSelectedOneCanBeChosen() {
+        onEdt(() -> view.setSelectedTrack(1));
+        click(200, 125); // image (160, 100): inside track 4's box, itself inside track 1's
+        assertEquals(4, view.selectedTrack());
+        // A drag there now moves track 4's box, not track 1's: 10 view px = 8 image px.
+        drag(200, 125, 210, 125, MouseEvent.BUTTON1);
+        assertEquals(List.of("selected 4", "changed 4 0 " + new Box(158, 90, 20, 20)), heard);
     }
 
     @Test
