@@ -24,6 +24,7 @@ import javax.swing.ToolTipManager;
 import javax.swing.UIManager;
 
 import org.modetrail.app.editor.LaneModel.State;
+import org.modetrail.model.BoxSource;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.ObjectClass;
 import org.modetrail.model.Project;
@@ -63,6 +64,8 @@ public final class TimelineView extends JComponent {
     static final double ZOOM_STEP = 1.25;
     private static final int BAR_INSET = 3;
     private static final int MIN_TICK_SPACING = 90;
+    /** Frames at least this many pixels wide are drawn with a hairline between them. */
+    private static final int FRAME_SEPARATOR_WIDTH = 8;
 
     private final LaneModel.Config config;
     private final List<Listener> listeners = new CopyOnWriteArrayList<>();
@@ -297,7 +300,7 @@ public final class TimelineView extends JComponent {
         String what = describe(shown);
         if (to - from == 1) {
             FrameAnnotation a = t.frames().get(f);
-            if (a != null && a.source() == org.modetrail.model.BoxSource.TRACKED && a.isVisible()) {
+            if (a != null && a.source() == BoxSource.TRACKED && a.isVisible()) {
                 what += String.format(Locale.ROOT, " (similarity %.2f)", a.score());
             }
         } else if (shown != State.EMPTY) {
@@ -497,6 +500,19 @@ public final class TimelineView extends JComponent {
             }
         }
         double frameWidth = (double) w / span;
+        if (frameWidth >= FRAME_SEPARATOR_WIDTH) {
+            // Zoomed in far enough to tell frames apart: a hairline of background between them.
+            g.setColor(painter.background);
+            for (int f = first + 1; f < first + span; f++) {
+                int col = (int) ceilDiv((long) (f - first) * w, span);
+                int v = col < w ? columns[col] : 0;
+                // Only across filled bars: an outline (hidden) or a line (absent) is left whole.
+                if (v == State.TRACKED.priority() || v == State.KEYFRAME.priority() || v == State.WEAK.priority()
+                        || v == State.INTERPOLATED.priority()) {
+                    g.drawLine(LABEL_WIDTH + col, barTop, LABEL_WIDTH + col, barTop + barHeight - 1);
+                }
+            }
+        }
         int c = 0;
         while (c < w) {
             int end = c;

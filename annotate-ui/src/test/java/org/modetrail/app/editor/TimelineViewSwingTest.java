@@ -64,8 +64,10 @@ class TimelineViewSwingTest {
             frame.getContentPane().add(list, BorderLayout.CENTER);
             timeline.setPreferredSize(new java.awt.Dimension(WIDTH, 120));
             frame.setSize(WIDTH, 400);
-            frame.setLocation(40, 40);
+            frame.setLocation(600, 500);
+            frame.setAlwaysOnTop(true);
             frame.setVisible(true);
+            frame.toFront();
         });
         robot.waitForIdle();
         robot.delay(200);
@@ -88,8 +90,26 @@ class TimelineViewSwingTest {
         return p.get();
     }
 
-    private void click(Point p) {
+    /**
+     * Moves the pointer to {@code p} on the screen and waits until the window sees it there: the display may be
+     * shared, and a window of another program on top would take the events.
+     */
+    private void moveTo(Point p) throws Exception {
         robot.mouseMove(p.x, p.y);
+        robot.waitForIdle();
+        for (int i = 0; i < 40; i++) {
+            Point seen = onEdt(() -> frame.getMousePosition(true));
+            if (seen != null) {
+                return;
+            }
+            robot.delay(50);
+            robot.mouseMove(p.x, p.y);
+        }
+        throw new AssertionError("the test window does not get the pointer at " + p + ": is another window on top?");
+    }
+
+    private void click(Point p) throws Exception {
+        moveTo(p);
         robot.mousePress(InputEvent.BUTTON1_DOWN_MASK);
         robot.mouseRelease(InputEvent.BUTTON1_DOWN_MASK);
         robot.waitForIdle();
@@ -128,7 +148,7 @@ class TimelineViewSwingTest {
     @Test
     void draggingScrubs() throws Exception {
         Point from = onScreen(TimelineView.LABEL_WIDTH + 100, 10);
-        robot.mouseMove(from.x, from.y);
+        moveTo(from);
         robot.mousePress(InputEvent.BUTTON1_DOWN_MASK);
         for (int dx = 20; dx <= 200; dx += 20) {
             robot.mouseMove(from.x + dx, from.y);
@@ -147,7 +167,7 @@ class TimelineViewSwingTest {
         int under = onEdt(() -> timeline.frameAtX(x)); // floor(600 * 450 / 800) = 337
         assertEquals(337, under);
         Point p = onScreen(x, TimelineView.RULER_HEIGHT + 5);
-        robot.mouseMove(p.x, p.y);
+        moveTo(p);
         robot.mouseWheel(-3); // three notches in: 450 / 1.25^3 = 230 frames
         robot.waitForIdle();
         assertEquals(230, (int) onEdt(timeline::visibleSpan));
@@ -172,7 +192,7 @@ class TimelineViewSwingTest {
             Point o = list.table().getLocationOnScreen();
             return new Rectangle(o.x + r.x, o.y + r.y, r.width, r.height);
         });
-        robot.mouseMove(cell.x + cell.width / 2, cell.y + cell.height / 2);
+        moveTo(new Point(cell.x + cell.width / 2, cell.y + cell.height / 2));
         robot.mousePress(InputEvent.BUTTON1_DOWN_MASK);
         robot.mouseRelease(InputEvent.BUTTON1_DOWN_MASK);
         robot.waitForIdle();
