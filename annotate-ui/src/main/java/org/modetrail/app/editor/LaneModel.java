@@ -14,6 +14,11 @@ import org.modetrail.model.Track;
  * single weak frame in an hour of tracked frames still shows as one weak column, and a user's keyframe is never
  * drawn over.
  *
+ * <p>For drawing, {@link #columns(int, int, int, byte[], boolean[])} gives two layers instead: the bar, which shows
+ * the most important state other than keyframe (a keyframe counts as a box, like a tracked one), and whether the
+ * column holds a keyframe at all, drawn as a marker on top. That way a column with a keyframe and a weak frame shows
+ * both, and dense keyframes in a zoomed-out view do not hide the weak or hidden frames between them.
+ *
  * <p>Immutable once built; safe to read from any thread.
  */
 public final class LaneModel {
@@ -75,16 +80,26 @@ public final class LaneModel {
     private final int trackId;
     private final byte[] states;
     private final byte[] blockMax;
+    /** Per block, the most important state with keyframes counted as tracked. */
+    private final byte[] blockBar;
+    private static final byte KEY = (byte) State.KEYFRAME.ordinal();
+    private static final byte BOX = (byte) State.TRACKED.ordinal();
 
     private LaneModel(int trackId, byte[] states) {
         this.trackId = trackId;
         this.states = states;
         int blocks = (states.length + BLOCK - 1) / BLOCK;
         this.blockMax = new byte[blocks];
+        this.blockBar = new byte[blocks];
         for (int f = 0; f < states.length; f++) {
             int b = f / BLOCK;
-            if (states[f] > blockMax[b]) {
-                blockMax[b] = states[f];
+            byte v = states[f];
+            if (v > blockMax[b]) {
+                blockMax[b] = v;
+            }
+            byte bar = v == KEY ? BOX : v;
+            if (bar > blockBar[b]) {
+                blockBar[b] = bar;
             }
         }
     }
@@ -168,6 +183,24 @@ public final class LaneModel {
         }
     }
 
+    /**
+     * The two layers the timeline draws, for frames {@code first .. first + span - 1} over {@code width} columns:
+     * {@code bar[c]}, the {@link State#priority()} of the most important state in column {@code c} with keyframes
+     * counted as {@link State#TRACKED} (never {@code KEYFRAME}), and {@code keyframes[c]}, whether the column holds
+     * a keyframe. Allocates nothing.
+     */
+    public void columns(int first, int span, int width, byte[] bar, boolean[] keyframes) {
+        if (span <= 0 || width <= 0 || bar.length < width || keyframes.length < width) {
+            throw new IllegalArgumentException("need a positive span and width and room for " + width + " columns");
+        }
+        for (int c = 0; c < width; c++) {
+            int from = frameAtColumn(first, span, width, c);
+            int to = Math.max(from + 1, frameAtColumn(first, span, width, c + 1));
+            bar[c] = barOver(from, to);
+            keyframes[c] = maxOver(from, to) == KEY;
+        }
+    }
+
     /** The columns as states (a convenience for tests and tooltips; allocates). */
     public State[] columns(int first, int span, int width) {
         byte[] b = new byte[width];
@@ -177,6 +210,31 @@ public final class LaneModel {
             s[i] = State.ofPriority(b[i]);
         }
         return s;
+    }
+
+    /** As {@link #maxOver} with keyframes counted as tracked. */
+    byte barOver(int from, int to) {
+        from = Math.max(from, 0);
+        to = Math.min(to, states.length);
+        byte max = 0;
+        int top = State.WEAK.priority();
+        int f = from;
+        while (f < to && max < top) {
+            if (f % BLOCK == 0 && f + BLOCK <= to) {
+                byte b = blockBar[f / BLOCK];
+                if (b > max) {
+                    max = b;
+                }
+                f += BLOCK;
+            } else {
+                byte v = states[f] == KEY ? BOX : states[f];
+                if (v > max) {
+                    max = v;
+                }
+                f++;
+            }
+        }
+        return max;
     }
 
     /** The highest priority over frames {@code from} (inclusive) to {@code to} (exclusive), clipped to the video. */

@@ -20,7 +20,7 @@ import org.modetrail.app.editor.LaneModel.State;
  * "Color Universal Design") and, so that colour is never the only cue, a shape of its own:
  * <ul>
  * <li>tracked: a solid bar (blue);</li>
- * <li>keyframe: the solid bar with a diamond on top (yellow with a black edge);</li>
+ * <li>keyframe: a diamond (yellow with a black edge) on the bar's top edge, over whatever the bar shows;</li>
  * <li>weak: a checked bar (vermillion on light themes, orange on dark ones);</li>
  * <li>interpolated: a bar of diagonal hatching (bluish green) between two thin rules;</li>
  * <li>hidden: the bar's outline only (reddish purple);</li>
@@ -96,7 +96,7 @@ final class LanePainter {
 
     /**
      * Draws a run of columns {@code x .. x + width - 1} in state {@code s}, in a lane band whose bar spans
-     * {@code top .. top + height - 1}. Keyframe diamonds are drawn by {@link #paintKeyMarks} afterwards, so that
+     * {@code top .. top + height - 1}. Keyframe diamonds ({@link #diamond}) are drawn afterwards, so that
      * neighbouring runs do not cover them.
      */
     void paintRun(Graphics2D g, State s, int x, int width, int top, int height) {
@@ -141,26 +141,10 @@ final class LanePainter {
         }
     }
 
-    /**
-     * Diamonds on a run of keyframe columns {@code x .. x + width - 1}: one in the middle of a narrow run, one
-     * every {@code 3 * size / 2} pixels along a wide one (when zoomed in, {@code frameWidth} pixels a frame, one per
-     * frame if they fit).
-     */
-    void paintKeyMarks(Graphics2D g, int x, int width, int centreY, int size, double frameWidth) {
-        double step = Math.max(size * 1.5, frameWidth);
+    /** A keyframe's mark: a yellow diamond with a black edge, {@code size} px across, centred on (cx, cy). */
+    void diamond(Graphics2D g, double cx, int cy, int size) {
         Object aa = g.getRenderingHint(RenderingHints.KEY_ANTIALIASING);
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-        if (width <= step) {
-            diamond(g, x + width / 2.0, centreY, size);
-        } else {
-            for (double cx = x + Math.min(step, frameWidth) / 2.0; cx < x + width; cx += step) {
-                diamond(g, cx, centreY, size);
-            }
-        }
-        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, aa);
-    }
-
-    void diamond(Graphics2D g, double cx, int cy, int size) {
         int r = size / 2;
         int x = (int) Math.round(cx);
         Polygon p = new Polygon(new int[] {x, x + r, x, x - r}, new int[] {cy - r, cy, cy + r, cy}, 4);
@@ -168,13 +152,14 @@ final class LanePainter {
         g.fillPolygon(p);
         g.setColor(BLACK);
         g.drawPolygon(p);
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, aa);
     }
 
     /** A sample of state {@code s} in {@code r}, as the lanes draw it (for the legend). */
     void paintSample(Graphics2D g, State s, Rectangle r) {
         paintRun(g, s, r.x, r.width, r.y, r.height);
         if (s == State.KEYFRAME) {
-            paintKeyMarks(g, r.x, r.width, r.y + r.height / 2, r.height + 2, 1);
+            diamond(g, r.x + r.width / 2.0, r.y + 2, TimelineView.KEY_MARK_SIZE);
         }
     }
 

@@ -56,13 +56,15 @@ public final class TimelineView extends JComponent {
 
     static final int LANE_HEIGHT = 18;
     static final int RULER_HEIGHT = 30;
-    static final int LABEL_WIDTH = 130;
+    static final int LABEL_WIDTH = 150;
     static final int RIGHT_MARGIN = 8;
     /** The fewest frames the view zooms in to. */
     static final int MIN_SPAN = 10;
     /** Zoom factor for one notch of the wheel. */
     static final double ZOOM_STEP = 1.25;
     private static final int BAR_INSET = 3;
+    /** Width and height of a keyframe's diamond. */
+    static final int KEY_MARK_SIZE = 10;
     private static final int MIN_TICK_SPACING = 90;
     /** Frames at least this many pixels wide are drawn with a hairline between them. */
     private static final int FRAME_SEPARATOR_WIDTH = 8;
@@ -80,6 +82,7 @@ public final class TimelineView extends JComponent {
     private Integer selectedTrack;
     private double[] frameTimes;
     private byte[] columns = new byte[0];
+    private boolean[] keyColumns = new boolean[0];
     private LanePainter painter;
 
     public TimelineView() {
@@ -295,16 +298,23 @@ public final class TimelineView extends JComponent {
         int col = Math.max(0, Math.min(w - 1, e.getX() - LABEL_WIDTH));
         int from = LaneModel.frameAtColumn(first, span, w, col);
         int to = Math.max(from + 1, LaneModel.frameAtColumn(first, span, w, col + 1));
-        State shown = State.ofPriority(lanes[i].maxOver(from, to));
+        State bar = State.ofPriority(lanes[i].barOver(from, to));
+        boolean key = lanes[i].maxOver(from, to) == State.KEYFRAME.priority();
         String where = to - from > 1 ? "frames " + from + "-" + (to - 1) : "frame " + f + timeSuffix(f);
-        String what = describe(shown);
+        String what;
         if (to - from == 1) {
+            what = describe(lanes[i].stateAt(f));
             FrameAnnotation a = t.frames().get(f);
             if (a != null && a.source() == BoxSource.TRACKED && a.isVisible()) {
                 what += String.format(Locale.ROOT, " (similarity %.2f)", a.score());
             }
-        } else if (shown != State.EMPTY) {
-            what = "at least one " + what.toLowerCase(Locale.ROOT);
+        } else {
+            // A column of several frames: its most telling state, and whether a keyframe is among them.
+            what = bar == State.EMPTY ? describe(bar) : "at least one " + describe(bar).toLowerCase(Locale.ROOT)
+                    + " frame";
+            if (key) {
+                what += ", with a keyframe";
+            }
         }
         return "Track " + t.id() + " (" + t.className() + "), " + where + ": " + what;
     }
@@ -430,6 +440,7 @@ public final class TimelineView extends JComponent {
             int w = laneWidth();
             if (columns.length < w) {
                 columns = new byte[w];
+                keyColumns = new boolean[w];
             }
             for (int i = firstLane; i <= lastLane; i++) {
                 paintLane(g, i, w);
@@ -477,11 +488,11 @@ public final class TimelineView extends JComponent {
         g.drawString(label, 22, top + (LANE_HEIGHT + fm.getAscent() - fm.getDescent()) / 2);
 
         // Bar: runs of equal columns.
-        lanes[i].columns(first, span, w, columns);
+        lanes[i].columns(first, span, w, columns, keyColumns);
         int barTop = top + BAR_INSET;
         int barHeight = LANE_HEIGHT - 2 * BAR_INSET;
         Rectangle oldClip = g.getClipBounds();
-        g.clipRect(LABEL_WIDTH - LanePainter.MIN_MARK_WIDTH, top, w + 2 * LanePainter.MIN_MARK_WIDTH, LANE_HEIGHT);
+        g.clipRect(LABEL_WIDTH - KEY_MARK_SIZE / 2, top, w + KEY_MARK_SIZE / 2 + RIGHT_MARGIN, LANE_HEIGHT);
         // Low-priority states first, so that widened weak or hidden marks are drawn over their neighbours.
         for (int pass = 0; pass < 2; pass++) {
             int c = 0;
@@ -507,27 +518,52 @@ public final class TimelineView extends JComponent {
                 int col = (int) ceilDiv((long) (f - first) * w, span);
                 int v = col < w ? columns[col] : 0;
                 // Only across filled bars: an outline (hidden) or a line (absent) is left whole.
-                if (v == State.TRACKED.priority() || v == State.KEYFRAME.priority() || v == State.WEAK.priority()
+                if (v == State.TRACKED.priority() || v == State.WEAK.priority()
                         || v == State.INTERPOLATED.priority()) {
                     g.drawLine(LABEL_WIDTH + col, barTop, LABEL_WIDTH + col, barTop + barHeight - 1);
                 }
             }
         }
+        paintKeyMarks(g, w, barTop);
+        g.setClip(oldClip);
+    }
+
+    /**
+     * Diamonds for the keyframes, centred on the bar's top edge so that the lower part of the bar shows beside
+     * them: one per keyframe when zoomed in, one per run of keyframe columns when zoomed out (a little smaller), and
+     * none closer to the one before than a little over its size zoomed in, twice that zoomed out (dense keyframes
+     * make a loose chain, not a pile that hides the bar).
+     */
+    private void paintKeyMarks(Graphics2D g, int w, int barTop) {
+        boolean zoomedIn = w >= span;
+        int size = zoomedIn ? KEY_MARK_SIZE : KEY_MARK_SIZE - 2;
+        int spacing = zoomedIn ? KEY_MARK_SIZE + 2 : 2 * KEY_MARK_SIZE;
+        double last = Double.NEGATIVE_INFINITY;
         int c = 0;
         while (c < w) {
-            int end = c;
-            while (end < w && columns[end] == State.KEYFRAME.priority()) {
-                end++;
-            }
-            if (end > c) {
-                painter.paintKeyMarks(g, LABEL_WIDTH + c, end - c, top + LANE_HEIGHT / 2, LANE_HEIGHT - 6,
-                        frameWidth);
-                c = end;
-            } else {
+            if (!keyColumns[c]) {
                 c++;
+                continue;
             }
+            // The columns showing the same frames as column c (one frame zoomed in; the run zoomed out).
+            int end = c + 1;
+            if (zoomedIn) {
+                int f = LaneModel.frameAtColumn(first, span, w, c);
+                while (end < w && keyColumns[end] && LaneModel.frameAtColumn(first, span, w, end) == f) {
+                    end++;
+                }
+            } else {
+                while (end < w && keyColumns[end]) {
+                    end++;
+                }
+            }
+            double centre = LABEL_WIDTH + (c + end - 1) / 2.0;
+            if (centre - last >= spacing) {
+                painter.diamond(g, centre, barTop + 2, size);
+                last = centre;
+            }
+            c = end;
         }
-        g.setClip(oldClip);
     }
 
     private void paintCursor(Graphics2D g) {

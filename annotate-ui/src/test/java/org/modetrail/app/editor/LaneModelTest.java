@@ -67,6 +67,18 @@ class LaneModelTest {
     }
 
     @Test
+    void theTimelineLayersShowKeyframesApartFromTheBar() {
+        // Same columns as above; the bar counts a keyframe as a box and the keyframes are flagged apart, so the
+        // last column shows its weak frame 8 and its keyframe 9 both.
+        byte[] bar = new byte[5];
+        boolean[] keys = new boolean[5];
+        LaneModel.of(tenFrames(), 10, DEFAULTS).columns(0, 10, 5, bar, keys);
+        assertArrayEquals(new byte[] {(byte) State.TRACKED.priority(), (byte) State.WEAK.priority(),
+            (byte) State.HIDDEN.priority(), (byte) State.TRACKED.priority(), (byte) State.WEAK.priority()}, bar);
+        assertArrayEquals(new boolean[] {true, false, false, false, true}, keys);
+    }
+
+    @Test
     void unevenColumnsFollowTheFloorRule() {
         // 10 frames over 3 columns start at 0, floor(10/3) = 3, floor(20/3) = 6: [0,3) [3,6) [6,10).
         assertEquals(3, LaneModel.frameAtColumn(0, 10, 3, 1));
@@ -123,19 +135,33 @@ class LaneModelTest {
                 m.put(f, a);
             }
         }
+        for (int f = 0; f < n; f += 97) {
+            m.put(f, FrameAnnotation.keyframe(f, BOX));
+        }
         LaneModel lane = LaneModel.of(new Track(2, "car", "", m), n, DEFAULTS);
         int[][] views = {{0, n, 37}, {13, 4_000, 61}, {100, 3_333, 1_000}, {4_900, 100, 700}, {0, n, 1}};
         for (int[] v : views) {
             byte[] cols = new byte[v[2]];
+            byte[] bar = new byte[v[2]];
+            boolean[] keys = new boolean[v[2]];
             lane.columns(v[0], v[1], v[2], cols);
+            lane.columns(v[0], v[1], v[2], bar, keys);
             for (int c = 0; c < v[2]; c++) {
                 int from = LaneModel.frameAtColumn(v[0], v[1], v[2], c);
                 int to = Math.max(from + 1, LaneModel.frameAtColumn(v[0], v[1], v[2], c + 1));
                 int max = 0;
+                int barMax = 0;
+                boolean key = false;
                 for (int f = from; f < to; f++) {
-                    max = Math.max(max, lane.stateAt(f).priority());
+                    State s = lane.stateAt(f);
+                    max = Math.max(max, s.priority());
+                    barMax = Math.max(barMax, (s == State.KEYFRAME ? State.TRACKED : s).priority());
+                    key |= s == State.KEYFRAME;
                 }
-                assertEquals(max, cols[c], "view " + v[0] + "+" + v[1] + "/" + v[2] + " column " + c);
+                String where = "view " + v[0] + "+" + v[1] + "/" + v[2] + " column " + c;
+                assertEquals(max, cols[c], where);
+                assertEquals(barMax, bar[c], where);
+                assertEquals(key, keys[c], where);
             }
         }
     }

@@ -218,7 +218,70 @@ final class TimelineDemo {
         });
     }
 
+    /** An hour at 25 fps with 50 tracks, each over a stretch of the video with keyframes every 500 frames. */
+    static Project hour() {
+        int n = 90_000;
+        List<Track> tracks = new java.util.ArrayList<>();
+        java.util.Random random = new java.util.Random(3);
+        Box b = new Box(100, 100, 30, 30);
+        for (int t = 1; t <= 50; t++) {
+            TreeMap<Integer, FrameAnnotation> m = new TreeMap<>();
+            int start = random.nextInt(n / 2);
+            int end = Math.min(n, start + 10_000 + random.nextInt(n / 2));
+            int hiddenAt = start + random.nextInt(end - start);
+            for (int f = start; f < end; f++) {
+                if (f >= hiddenAt && f < hiddenAt + 400) {
+                    put(m, FrameAnnotation.markedBy(f, Presence.HIDDEN));
+                } else if ((f - start) % 500 == 0) {
+                    put(m, FrameAnnotation.keyframe(f, b));
+                } else if ((f - start) % 500 > 450) {
+                    put(m, FrameAnnotation.interpolated(f, b));
+                } else {
+                    put(m, FrameAnnotation.tracked(f, b, random.nextInt(20_000) == 0 ? 0.2 : 0.9));
+                }
+            }
+            tracks.add(new Track(t, t % 3 == 0 ? "handler" : "animal", "", m));
+        }
+        return new Project(new VideoRef("hour.mp4", 1920, 1080, n, ""), List.of(ANIMAL, HANDLER), tracks);
+    }
+
+    static void hourScreenshot(File out) throws Exception {
+        SwingUtilities.invokeAndWait(() -> {
+            Project p = hour();
+            TimelineView timeline = new TimelineView();
+            timeline.setProject(p, 90_000);
+            double[] t = new double[90_000];
+            for (int i = 0; i < t.length; i++) {
+                t[i] = i / 25.0;
+            }
+            timeline.setFrameTimes(t);
+            timeline.setCurrentFrame(40_000);
+            JFrame frame = new JFrame("hour");
+            frame.getContentPane().add(new javax.swing.JScrollPane(timeline));
+            frame.getContentPane().add(new TimelineLegend(timeline), BorderLayout.SOUTH);
+            frame.setSize(1100, 1000);
+            frame.setVisible(true);
+            frame.validate();
+            BufferedImage img = new BufferedImage(frame.getContentPane().getWidth(),
+                    frame.getContentPane().getHeight(), BufferedImage.TYPE_INT_RGB);
+            Graphics2D g = img.createGraphics();
+            frame.getContentPane().paint(g);
+            g.dispose();
+            try {
+                ImageIO.write(img, "png", out);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+            frame.dispose();
+        });
+    }
+
     public static void main(String[] args) throws Exception {
+        if (args.length > 0 && args[0].equals("hour")) {
+            FlatLightLaf.setup();
+            hourScreenshot(new File("/tmp/timeline-hour.png"));
+            System.exit(0);
+        }
         Path truth = Path.of(args.length > 0 ? args[0] : "clips/arena-truth.csv");
         int first = args.length > 2 ? Integer.parseInt(args[1]) : 0;
         int span = args.length > 2 ? Integer.parseInt(args[2]) : 0;

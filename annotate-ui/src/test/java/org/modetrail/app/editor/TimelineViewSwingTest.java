@@ -27,7 +27,7 @@ import org.junit.jupiter.api.Test;
  * runs headless by default; run with {@code -Djava.awt.headless=false} and a {@code DISPLAY} to include these.
  */
 class TimelineViewSwingTest {
-    /** 130 px of labels, 800 px of lanes, 8 px margin. */
+    /** The labels, 800 px of lanes, the margin. */
     private static final int WIDTH = TimelineView.LABEL_WIDTH + 800 + TimelineView.RIGHT_MARGIN;
 
     private JFrame frame;
