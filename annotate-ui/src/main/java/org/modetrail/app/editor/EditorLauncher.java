@@ -6,28 +6,27 @@ import java.util.concurrent.CountDownLatch;
 
 import javax.swing.SwingUtilities;
 
-import com.formdev.flatlaf.FlatLightLaf;
-
-/** Starts the editor's window on the event thread, the FlatLaf look installed first. */
+/** Starts the editor's window on the event thread, with the remembered FlatLaf theme installed first. */
 public final class EditorLauncher {
     private static final CountDownLatch CLOSED = new CountDownLatch(1);
 
     private EditorLauncher() {
     }
 
-    /** Opens the editor, on a video when one is given. */
-    public static void open(Path video) {
+    /** Opens the editor, on a video or project when one is given. */
+    public static void open(Path file) {
         if (GraphicsEnvironment.isHeadless()) {
             throw new IllegalStateException("no display: the editor needs a desktop session (or Xvfb); "
                     + "the other commands run without one");
         }
         System.setProperty("flatlaf.uiScale.allowScaleDown", "true");
         SwingUtilities.invokeLater(() -> {
-            FlatLightLaf.setup();
-            ViewerWindow window = new ViewerWindow(CLOSED::countDown);
+            EditorPreferences prefs = EditorPreferences.user();
+            Themes.apply(prefs.darkTheme());
+            EditorWindow window = new EditorWindow(prefs, CLOSED::countDown);
             window.setVisible(true);
-            if (video != null) {
-                window.openVideo(video);
+            if (file != null) {
+                window.open(file);
             }
         });
     }

@@ -1,0 +1,244 @@
+package org.modetrail.app.editor;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.GraphicsEnvironment;
+import java.awt.Point;
+import java.awt.event.KeyEvent;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.UUID;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BooleanSupplier;
+import java.util.prefs.Preferences;
+
+import javax.swing.JDialog;
+import javax.swing.JOptionPane;
+import javax.swing.SwingUtilities;
+
+import org.assertj.swing.core.BasicRobot;
+import org.assertj.swing.core.MouseButton;
+import org.assertj.swing.core.Robot;
+import org.assertj.swing.edt.GuiActionRunner;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.modetrail.format.TracksFormat;
+import org.modetrail.format.project.ProjectFile;
+import org.modetrail.model.Box;
+import org.modetrail.model.BoxSource;
+import org.modetrail.model.Project;
+import org.modetrail.model.Track;
+
+/**
+ * The editor as a user drives it, in a real window under Xvfb: open a video, draw a box, see the track appear,
+ * step, correct a box, undo, save, reopen, export; and bad input (a broken project) says what is wrong without
+ * freezing. The arena clip is copied to a scratch folder so the project and its autosave land there.
+ */
+class EditorWindowTest {
+    private static final Path CLIP = Path.of("..", "clips", "arena.mp4");
+    /** Animal 1 on frame 0 (clips/arena-keys.csv). */
+    private static final Box ANIMAL = new Box(383, 291, 24, 43);
+
+    @TempDir
+    Path dir;
+    private Robot robot;
+    private EditorWindow window;
+    private Preferences node;
+
+    @BeforeEach
+    void start() {
+        boolean x11 = !System.getenv().getOrDefault("DISPLAY", "").isBlank();
+        Assumptions.assumeTrue(!GraphicsEnvironment.isHeadless() && x11, "no display (CI runs this under Xvfb)");
+        robot = BasicRobot.robotWithNewAwtHierarchy();
+        node = Preferences.userRoot().node("org/modetrail/editor-test-" + UUID.randomUUID());
+        window = GuiActionRunner.execute(() -> {
+            Themes.apply(false);
+            EditorWindow w = new EditorWindow(new EditorPreferences(node), () -> { });
+            w.setSize(1200, 820);
+            w.setLocation(0, 0);
+            w.setVisible(true);
+            return w;
+        });
+        robot.waitForIdle();
+    }
+
+    @AfterEach
+    void stop() throws Exception {
+        if (robot != null) {
+            GuiActionRunner.execute(() -> {
+                if (window.session() != null) {
+                    window.session().close();
+                }
+                window.dispose();
+            });
+            robot.cleanUp();
+            node.removeNode();
+        }
+    }
+
+    private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
+        long end = System.nanoTime() + Duration.ofSeconds(60).toNanos();
+        while (!condition.getAsBoolean()) {
+            if (System.nanoTime() > end) {
+                throw new AssertionError("timed out waiting for " + what);
+            }
+            Thread.sleep(20);
+        }
+    }
+
+    private Project project() {
+        return GuiActionRunner.execute(() -> window.session().project());
+    }
+
+    /** The screen point of an image point on the canvas. */
+    private Point onScreen(double x, double y) {
+        return GuiActionRunner.execute(() -> {
+            FrameView v = findFrameView();
+            Point origin = v.getLocationOnScreen();
+            ViewTransform t = v.transform();
+            return new Point(origin.x + (int) Math.round(t.toViewX(x)), origin.y + (int) Math.round(t.toViewY(y)));
+        });
+    }
+
+    private FrameView findFrameView() {
+        return (FrameView) robot.finder().findByName(window, "frameView");
+    }
+
+    private void drag(Point from, Point to) {
+        robot.moveMouse(from);
+        robot.pressMouse(MouseButton.LEFT_BUTTON);
+        robot.moveMouse(new Point((from.x + to.x) / 2, (from.y + to.y) / 2));
+        robot.moveMouse(to);
+        robot.releaseMouse(MouseButton.LEFT_BUTTON);
+        robot.waitForIdle();
+    }
+
+    private Path openCopyOfTheClip() throws Exception {
+        Path clip = Files.copy(CLIP, dir.resolve("arena.mp4"));
+        GuiActionRunner.execute(() -> window.open(clip));
+        waitFor(() -> GuiActionRunner.execute(() -> window.session() != null && findFrameView().frame() == 0),
+                "the clip to open and show frame 0");
+        robot.waitForIdle();
+        return clip;
+    }
+
+    @Test
+    void drawTrackStepCorrectUndoSaveReopenExport() throws Exception {
+        Path clip = openCopyOfTheClip();
+        // Draw a box around animal 1 on frame 0 and accept the class offered.
+        drag(onScreen(ANIMAL.x(), ANIMAL.y()), onScreen(ANIMAL.right(), ANIMAL.bottom()));
+        JDialog classDialog = waitForDialog();
+        robot.pressAndReleaseKey(KeyEvent.VK_ENTER);
+        waitFor(() -> !classDialog.isShowing(), "the class dialog to close");
+        waitFor(() -> project().tracks().size() == 1 && !window.session().isTracking(), "tracking");
+        Track t = project().tracks().get(0);
+        assertEquals(450, t.frames().size(), "one box drawn, the whole clip tracked");
+        Box drawn = t.at(0).orElseThrow().box();
+        assertEquals(ANIMAL.x(), drawn.x(), 2);
+        assertEquals(ANIMAL.width(), drawn.width(), 3);
+        int rows = GuiActionRunner.execute(() -> ((TrackListPanel) robot.finder().findByName(window, "trackList"))
+                .rows().size());
+        assertEquals(1, rows, "the track list shows it");
+
+        // Step to frame 10 and drag the box 6 px to the right: a keyframe there. (Under Xvfb there is no window
+        // manager to give the window the focus back after the dialog, so the test clicks it, as a user would.)
+        robot.click((java.awt.Component) robot.finder().findByName(window, "status"));
+        robot.waitForIdle();
+        for (int i = 0; i < 10; i++) {
+            robot.pressAndReleaseKey(KeyEvent.VK_RIGHT);
+        }
+        waitFor(() -> GuiActionRunner.execute(() -> window.currentFrame() == 10 && findFrameView().frame() == 10),
+                "frame 10, at " + GuiActionRunner.execute(() -> window.currentFrame() + " active " + window.isActive()
+                        + " focus " + java.awt.KeyboardFocusManager.getCurrentKeyboardFocusManager().getFocusOwner()));
+        Box at10 = t.at(10).orElseThrow().box();
+        drag(onScreen(at10.centreX(), at10.centreY()), onScreen(at10.centreX() + 6, at10.centreY()));
+        waitFor(() -> project().tracks().get(0).at(10).orElseThrow().source() == BoxSource.KEYFRAME,
+                "the corrected box to become a keyframe");
+        assertEquals(at10.x() + 6, project().tracks().get(0).at(10).orElseThrow().box().x(), 2);
+        waitFor(() -> !window.session().isTracking(), "retracking");
+
+        // Undo takes the correction back.
+        control(KeyEvent.VK_Z);
+        waitFor(() -> project().tracks().get(0).at(10).orElseThrow().source() != BoxSource.KEYFRAME, "undo");
+
+        // Save, reopen in a new session, export.
+        control(KeyEvent.VK_S);
+        Path projectFile = EditorWindow.projectFileFor(clip);
+        waitFor(() -> Files.exists(projectFile) && !window.session().isDirty(), "the save");
+        assertEquals(1, ProjectFile.read(projectFile).tracks().size());
+        GuiActionRunner.execute(() -> window.open(projectFile));
+        waitFor(() -> GuiActionRunner.execute(() -> window.session() != null
+                && window.session().projectFile().equals(projectFile) && window.frameCount() == 450), "reopen");
+        assertEquals(450, project().tracks().get(0).frames().size());
+        Path csv = dir.resolve("arena.csv");
+        GuiActionRunner.execute(() -> window.exportTo(TracksFormat.CSV, csv));
+        waitFor(() -> Files.exists(dir.resolve("arena.csv.about.json")), "the export");
+        assertEquals(1 + 450, Files.readAllLines(csv).size());
+    }
+
+    @Test
+    void aTooSmallBoxAndABrokenProjectAreExplainedInTheWindow() throws Exception {
+        openCopyOfTheClip();
+        drag(onScreen(100, 100), onScreen(100.4, 100.4));
+        String status = GuiActionRunner.execute(() -> ((javax.swing.JLabel) robot.finder().findByName(window,
+                "status")).getText());
+        assertTrue(project().tracks().isEmpty(), "no track from a dot");
+        assertFalse(status.isBlank());
+        Path broken = Files.writeString(dir.resolve("broken.json"), "{\"format\": \"modetrail-project\",\n"
+                + " \"schema\": 2, \"video\": {\"path\": \"arena.mp4\", \"width\": 640,");
+        GuiActionRunner.execute(() -> window.open(broken));
+        JDialog error = waitForDialog();
+        String text = GuiActionRunner.execute(() -> messageOf(error));
+        assertTrue(text.contains("broken.json") && text.contains("line"), text);
+        robot.pressAndReleaseKey(KeyEvent.VK_ENTER);
+        waitFor(() -> !error.isShowing(), "the message to close");
+        assertEquals(450, GuiActionRunner.execute(() -> window.frameCount()), "the open clip is still there");
+    }
+
+    private void control(int key) {
+        robot.pressKey(KeyEvent.VK_CONTROL);
+        robot.pressAndReleaseKey(key);
+        robot.releaseKey(KeyEvent.VK_CONTROL);
+        robot.waitForIdle();
+    }
+
+    private JDialog waitForDialog() throws InterruptedException {
+        AtomicReference<JDialog> found = new AtomicReference<>();
+        waitFor(() -> {
+            for (java.awt.Window w : java.awt.Window.getWindows()) {
+                if (w instanceof JDialog d && d.isShowing()) {
+                    found.set(d);
+                    return true;
+                }
+            }
+            return false;
+        }, "a dialog");
+        robot.waitForIdle();
+        return found.get();
+    }
+
+    private static String messageOf(JDialog d) {
+        StringBuilder text = new StringBuilder();
+        collect(d.getContentPane(), text);
+        return text.toString();
+    }
+
+    private static void collect(java.awt.Container c, StringBuilder out) {
+        for (java.awt.Component k : c.getComponents()) {
+            if (k instanceof javax.swing.JLabel l && l.getText() != null) {
+                out.append(l.getText()).append('\n');
+            } else if (k instanceof javax.swing.text.JTextComponent tc) {
+                out.append(tc.getText()).append('\n');
+            }
+            if (k instanceof java.awt.Container inner) {
+                collect(inner, out);
+            }
+        }
+    }
+}
