@@ -149,14 +149,22 @@ public final class EditorWindow extends JFrame {
         tools.add(button("Next check", () -> reviewStep(true)));
         tools.add(button("Keys (F1)", this::showHelp));
 
+        // The frame takes what the track list and the timeline do not need.
+        trackList.setPreferredSize(new Dimension(400, 300));
+        trackList.setMinimumSize(new Dimension(160, 100));
+        frameView.setPreferredSize(new Dimension(640, 480));
+        frameView.setMinimumSize(new Dimension(200, 150));
         JSplitPane side = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, frameView, trackList);
-        side.setResizeWeight(0.82);
+        side.setResizeWeight(1.0);
         side.setOneTouchExpandable(true);
         JPanel timelinePanel = new JPanel(new BorderLayout());
         timelinePanel.add(new javax.swing.JScrollPane(timeline), BorderLayout.CENTER);
         timelinePanel.add(new TimelineLegend(timeline), BorderLayout.SOUTH);
+        // Room for the ruler and six lanes before the lanes scroll.
+        timelinePanel.setPreferredSize(new Dimension(800, 200));
+        timelinePanel.setMinimumSize(new Dimension(200, 90));
         JSplitPane main = new JSplitPane(JSplitPane.VERTICAL_SPLIT, side, timelinePanel);
-        main.setResizeWeight(0.78);
+        main.setResizeWeight(1.0);
 
         progress.setVisible(false);
         progress.setStringPainted(true);
@@ -350,6 +358,11 @@ public final class EditorWindow extends JFrame {
         frameView.setSelectedTrack(id);
         timeline.setSelectedTrack(id);
         trackList.setSelectedTrack(id);
+    }
+
+    /** Selects a track as a click on it would (for the screenshots). */
+    void selectTrackForTest(int id) {
+        select(id);
     }
 
     private void selectAndShow(int id) {

@@ -17,6 +17,18 @@ import javax.swing.table.DefaultTableModel;
 
 /** The list of every command and its key, over the window (F1 opens it, Escape or F1 closes it). */
 final class ShortcutHelp {
+    /** What the mouse and the canvas's own keys do. */
+    static final String[][] MOUSE = {
+        {"Frame", "Start a track: drag a box on empty space", "Drag"},
+        {"Frame", "Select a track", "Click its box"},
+        {"Frame", "Move or resize the selected box", "Drag it or a handle"},
+        {"Frame", "Zoom about the pointer", "Wheel"},
+        {"Frame", "Pan", "Space+drag, middle drag"},
+        {"Frame", "Fit the frame to the window", "F, double-click"},
+        {"Frame", "Drop the drag under way", "Escape"},
+        {"Timeline", "Go to a frame, select a track", "Click a lane"},
+        {"Timeline", "Zoom, scroll", "Wheel, Shift+Wheel"}};
+
     private ShortcutHelp() {
     }
 
@@ -30,13 +42,17 @@ final class ShortcutHelp {
         for (EditorWindow.Command c : commands) {
             model.addRow(new Object[] {c.menu(), c.name(), keyText(c.key())});
         }
+        for (String[] row : MOUSE) {
+            model.addRow(row);
+        }
         JTable table = new JTable(model);
         table.setName("shortcuts");
         table.setFillsViewportHeight(true);
         table.getColumnModel().getColumn(1).setPreferredWidth(380);
         JDialog d = new JDialog(owner, "Keys", false);
-        JLabel hint = new JLabel("Draw a box on the frame to start a track; drag a box or its handles to correct "
-                + "it. Every command has a key:");
+        JLabel hint = new JLabel("<html>Draw a box on the frame to start a track; drag a box or its handles to "
+                + "correct it (it becomes a keyframe and only the frames around it are tracked again). Every command "
+                + "has a key:</html>");
         hint.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
         hint.setFont(hint.getFont().deriveFont(Font.PLAIN));
         d.getContentPane().add(hint, BorderLayout.NORTH);

@@ -1,0 +1,103 @@
+package org.modetrail.app.editor;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.Color;
+import java.awt.GraphicsEnvironment;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.UUID;
+import java.util.prefs.Preferences;
+
+import javax.imageio.ImageIO;
+import javax.swing.JComponent;
+import javax.swing.JDialog;
+import javax.swing.SwingUtilities;
+
+import org.assertj.swing.edt.GuiActionRunner;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.modetrail.app.Main;
+
+/**
+ * Screenshots of the editor's main screen and its key list, in the light and the dark theme, on the arena demo
+ * tracked by the track command: written to target/screenshots (or -Dmodetrail.screenshotDir) for people to look
+ * at, and checked here only for what a screenshot can show without judging taste: the picture has the window's
+ * size and the theme's background.
+ */
+class EditorScreenshotsTest {
+    @ParameterizedTest(name = "{0}")
+    @ValueSource(strings = {"light", "dark"})
+    void mainScreenAndKeys(String theme) throws Exception {
+        boolean x11 = !System.getenv().getOrDefault("DISPLAY", "").isBlank();
+        Assumptions.assumeTrue(!GraphicsEnvironment.isHeadless() && x11, "no display (CI runs this under Xvfb)");
+        Path dir = Files.createTempDirectory("modetrail-shots");
+        Path clip = Files.copy(Path.of("..", "clips", "arena.mp4"), dir.resolve("arena.mp4"));
+        Path project = dir.resolve("arena.modetrail.json");
+        int code = Main.commandLine().execute("track", clip.toString(), "--keyframes",
+                Path.of("..", "clips", "arena-keys.csv").toString(), "--out", dir.resolve("t.csv").toString(),
+                "--project", project.toString());
+        assertEquals(0, code);
+        Path out = Path.of(System.getProperty("modetrail.screenshotDir", "target/screenshots"));
+        Files.createDirectories(out);
+        Preferences node = Preferences.userRoot().node("org/modetrail/editor-shots-" + UUID.randomUUID());
+        boolean dark = theme.equals("dark");
+        EditorWindow w = GuiActionRunner.execute(() -> {
+            Themes.apply(dark);
+            EditorWindow win = new EditorWindow(new EditorPreferences(node), () -> { });
+            win.setSize(1360, 860);
+            win.setVisible(true);
+            win.open(project);
+            return win;
+        });
+        try {
+            long end = System.nanoTime() + Duration.ofSeconds(60).toNanos();
+            while (GuiActionRunner.execute(() -> w.session() == null || w.frameCount() == 0)) {
+                assertTrue(System.nanoTime() < end, "the project did not open");
+                Thread.sleep(20);
+            }
+            // Frame 222, where two animals cross (the track command's quality line points there), track 3 selected.
+            GuiActionRunner.execute(() -> {
+                w.showFrame(222);
+                w.selectTrackForTest(3);
+            });
+            Thread.sleep(1500);
+            BufferedImage main = GuiActionRunner.execute(() -> paint(w.getRootPane()));
+            ImageIO.write(main, "png", out.resolve("editor-" + theme + ".png").toFile());
+            assertEquals(w.getRootPane().getWidth(), main.getWidth());
+            Color corner = new Color(main.getRGB(main.getWidth() - 3, main.getHeight() - 3));
+            int lightness = (corner.getRed() + corner.getGreen() + corner.getBlue()) / 3;
+            assertTrue(dark ? lightness < 128 : lightness > 128, theme + " theme, corner " + corner);
+            JDialog keys = GuiActionRunner.execute(() -> ShortcutHelp.show(w, w.commands()));
+            Thread.sleep(500);
+            BufferedImage help = GuiActionRunner.execute(() -> paint(keys.getRootPane()));
+            ImageIO.write(help, "png", out.resolve("editor-keys-" + theme + ".png").toFile());
+            GuiActionRunner.execute(keys::dispose);
+        } finally {
+            GuiActionRunner.execute(() -> {
+                try {
+                    if (w.session() != null) {
+                        w.session().close();
+                    }
+                } catch (java.io.IOException e) {
+                    throw new java.io.UncheckedIOException(e);
+                }
+                w.dispose();
+                Themes.apply(false);
+            });
+            node.removeNode();
+        }
+    }
+
+    private static BufferedImage paint(JComponent c) {
+        BufferedImage img = new BufferedImage(c.getWidth(), c.getHeight(), BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g = img.createGraphics();
+        c.paint(g);
+        g.dispose();
+        return img;
+    }
+}
