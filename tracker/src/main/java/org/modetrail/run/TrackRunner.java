@@ -1,10 +1,13 @@
 package org.modetrail.run;
 
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
+import java.util.function.Consumer;
 
+import org.modetrail.model.BoxSource;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.Project;
 import org.modetrail.model.Track;
@@ -71,6 +74,16 @@ public final class TrackRunner {
     /** Tracks the given spans (an edit's, or whole tracks); tracked frames inside them are replaced. */
     public Project track(VideoSource video, Project project, List<Span> spans, RunProgress progress,
                          BooleanSupplier cancelled) throws VideoException {
+        return track(video, project, spans, progress, cancelled, null, Duration.ZERO);
+    }
+
+    /**
+     * The same, also handing {@code partial} the project with the frames tracked so far at most every
+     * {@code partialEvery} while it runs (on the tracking thread), so a window can show a track grow.
+     */
+    public Project track(VideoSource video, Project project, List<Span> spans, RunProgress progress,
+                         BooleanSupplier cancelled, Consumer<Project> partial, Duration partialEvery)
+            throws VideoException {
         List<Segment> segments = new ArrayList<>();
         for (Span span : spans) {
             Track t = project.track(span.trackId()).orElseThrow(
@@ -92,23 +105,59 @@ public final class TrackRunner {
         }
         long[] done = {0};
         long all = total;
-        sweepForward(video, forward, progress, cancelled, done, all);
-        sweepBackward(video, backward, progress, cancelled, done, all);
+        RunProgress seen = partial == null ? progress : new PartialProgress(progress, partialEvery,
+                () -> partial.accept(assemble(project, segments, true)));
+        sweepForward(video, forward, seen, cancelled, done, all);
+        sweepBackward(video, backward, seen, cancelled, done, all);
+        Project result = assemble(project, segments, false);
+        progress.frames(all, all);
+        return result;
+    }
 
+    /**
+     * The project with each segment's frames as its passes have them: all of them when the passes are done, or
+     * only the frames tracked so far ({@code soFar}), without the interpolation that would stand in for frames
+     * the passes have not reached yet.
+     */
+    private Project assemble(Project project, List<Segment> segments, boolean soFar) {
         Project result = project;
         for (Segment s : segments) {
             Track t = result.track(s.trackId).orElseThrow();
             TrackFrames.Builder b = TrackFrames.clearNonKeyframes(t, s.from, s.to);
             for (FrameAnnotation a : s.fill(merge)) {
-                if (t.at(a.frame()).map(FrameAnnotation::isKeyframe).orElse(false)) {
+                if (t.at(a.frame()).map(FrameAnnotation::isKeyframe).orElse(false)
+                        || soFar && a.source() != BoxSource.TRACKED) {
                     continue;
                 }
                 b.put(a);
             }
             result = result.withTrack(b.build());
         }
-        progress.frames(all, all);
         return result;
+    }
+
+    /** Passes progress on, and every {@code every} hands the results so far to a listener. */
+    private static final class PartialProgress implements RunProgress {
+        private final RunProgress inner;
+        private final long everyNanos;
+        private final Runnable publish;
+        private long last = System.nanoTime();
+
+        PartialProgress(RunProgress inner, Duration every, Runnable publish) {
+            this.inner = inner;
+            this.everyNanos = every.toNanos();
+            this.publish = publish;
+        }
+
+        @Override
+        public void frames(long done, long total) {
+            inner.frames(done, total);
+            long now = System.nanoTime();
+            if (now - last >= everyNanos && done < total) {
+                last = now;
+                publish.run();
+            }
+        }
     }
 
     private static void sweepForward(VideoSource video, List<Pass> passes, RunProgress progress,

@@ -41,6 +41,26 @@ class TrackRunnerTest {
     }
 
     @Test
+    void partialResultsShowTheTrackGrowingWithTrackedFramesOnly() throws Exception {
+        MovingTargetVideo video = MovingTargetVideo.straightLine(80, null);
+        Project p = Edits.newTrack(projectFor(video), ANIMAL, 40, video.truth[40]).project();
+        java.util.List<Integer> sizes = new java.util.ArrayList<>();
+        Project done = new TrackRunner().track(video, p, java.util.List.of(new Span(1, 0, 79)), RunProgress.NONE,
+                () -> false, soFar -> {
+                    Track t = soFar.track(1).orElseThrow();
+                    assertTrue(t.frames().values().stream().allMatch(a -> a.isKeyframe()
+                            || a.source() == BoxSource.TRACKED), "nothing stands in for frames not reached yet");
+                    sizes.add(t.frames().size());
+                }, java.time.Duration.ZERO);
+        assertTrue(sizes.size() > 10, "published as it ran: " + sizes.size());
+        for (int i = 1; i < sizes.size(); i++) {
+            assertTrue(sizes.get(i) >= sizes.get(i - 1), "the track only grows: " + sizes);
+        }
+        assertTrue(sizes.get(sizes.size() - 1) <= done.track(1).orElseThrow().frames().size());
+        assertEquals(80, done.track(1).orElseThrow().frames().size());
+    }
+
+    @Test
     void aHiddenStretchBetweenKeyframesIsInterpolatedAndMarkedSo() throws Exception {
         boolean[] hidden = new boolean[60];
         for (int f = 20; f < 40; f++) {

@@ -40,6 +40,8 @@ import org.modetrail.video.VideoSource;
 public final class EditorSession implements AutoCloseable {
     /** Undo steps kept. */
     static final int HISTORY_DEPTH = 200;
+    /** How often the window sees a running track grow. */
+    static final Duration PARTIAL_EVERY = Duration.ofMillis(400);
 
     /** What the window hears about. */
     public interface Listener {
@@ -256,17 +258,9 @@ public final class EditorSession implements AutoCloseable {
         }
         try {
             Project tracked = runner.track(trackingVideo, snapshot, spans,
-                    (done, total) -> listeners.forEach(l -> l.trackingProgress(true, done, total)), cancel::get);
-            Project merged;
-            synchronized (this) {
-                merged = TrackResults.foldIn(history.current(), snapshot, tracked, spans);
-                if (merged != history.current()) {
-                    history.amend(merged);
-                    dirty = true;
-                    autosave.markDirty(merged);
-                }
-            }
-            fireChanged(merged);
+                    (done, total) -> listeners.forEach(l -> l.trackingProgress(true, done, total)), cancel::get,
+                    soFar -> foldIn(snapshot, soFar, spans), PARTIAL_EVERY);
+            foldIn(snapshot, tracked, spans);
         } catch (CancellationException e) {
             // The user stopped it; nothing to fold in.
         } catch (VideoException | RuntimeException e) {
@@ -277,6 +271,21 @@ public final class EditorSession implements AutoCloseable {
             }
             listeners.forEach(l -> l.trackingProgress(false, 0, 0));
         }
+    }
+
+    /** Brings a (partial or final) result into the current step of the history and tells the listeners. */
+    private void foldIn(Project snapshot, Project tracked, List<Span> spans) {
+        Project merged;
+        synchronized (this) {
+            merged = TrackResults.foldIn(history.current(), snapshot, tracked, spans);
+            if (merged == history.current()) {
+                return;
+            }
+            history.amend(merged);
+            dirty = true;
+            autosave.markDirty(merged);
+        }
+        fireChanged(merged);
     }
 
     private void fireChanged(Project p) {
