@@ -9,7 +9,7 @@ import org.modetrail.model.PixelPoint;
 
 /**
  * The ground grid to draw over the picture once a calibration exists: lines of constant ground x and y every
- * {@code spacing} metres, over the points' ground extent widened by one spacing, mapped into the image through the
+ * {@code spacing} metres, over the points' ground extent rounded out to whole spacings, mapped into the image through the
  * calibration's ground-to-image map. View geometry only. Each line is cut into short pieces so that a piece lying
  * beyond the horizon (on the other side of the camera from the points) is left out rather than drawn wrapped.
  *
@@ -61,10 +61,10 @@ record GroundGrid(double spacing, List<Segment> segments) {
             cy += p.world().y() / c.points().size();
         }
         double s = spacingFor(Math.max(maxX - minX, maxY - minY));
-        double x0 = (Math.floor(minX / s) - 1) * s;
-        double x1 = (Math.ceil(maxX / s) + 1) * s;
-        double y0 = (Math.floor(minY / s) - 1) * s;
-        double y1 = (Math.ceil(maxY / s) + 1) * s;
+        double x0 = Math.floor(minX / s) * s;
+        double x1 = Math.ceil(maxX / s) * s;
+        double y0 = Math.floor(minY / s) * s;
+        double y1 = Math.ceil(maxY / s) * s;
         double[] g = c.imageToWorld().inverse().entries();
         double side = Math.signum(g[6] * cx + g[7] * cy + g[8]);
         List<Segment> out = new ArrayList<>();
