@@ -214,6 +214,7 @@ public final class EditorWindow extends JFrame {
         add("Edit", "Merge another track into the selected one…", "M", this::merge);
         add("Edit", "Change the selected track's class…", "C", this::changeClass);
         add("Edit", "Delete the selected track", "control DELETE", this::deleteTrack);
+        add("Edit", "Calibrate the ground…", "control K", this::calibrate);
         add("Edit", "Stop tracking", "shift ESCAPE", () -> {
             if (session != null) {
                 session.cancelTracking();
@@ -717,6 +718,16 @@ public final class EditorWindow extends JFrame {
         edit(q -> Edits.newTrack(q, cls, f, box));
         select(session.project().tracks().get(session.project().tracks().size() - 1).id());
         status.setText("Tracking the new " + name + " forward and backward; keep working meanwhile");
+    }
+
+    /** Opens the ground calibration screen on the current frame (non-modal; storing it is an undoable edit). */
+    private void calibrate() {
+        if (frames == null || session == null) {
+            return;
+        }
+        frames.request(frame, (got, img) -> SwingUtilities.invokeLater(
+                () -> CalibrationDialog.forSession(this, img, session).setVisible(true)),
+                msg -> SwingUtilities.invokeLater(() -> status.setText(msg)));
     }
 
     private void deleteKeyframe() {

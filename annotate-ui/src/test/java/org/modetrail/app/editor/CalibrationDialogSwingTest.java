@@ -1,0 +1,164 @@
+package org.modetrail.app.editor;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.Component;
+import java.awt.GraphicsEnvironment;
+import java.awt.Point;
+import java.awt.image.BufferedImage;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.atomic.AtomicReference;
+
+import javax.imageio.ImageIO;
+import javax.swing.JTextField;
+
+import org.assertj.swing.core.BasicRobot;
+import org.assertj.swing.core.MouseButton;
+import org.assertj.swing.core.Robot;
+import org.assertj.swing.edt.GuiActionRunner;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.modetrail.model.GroundCalibration;
+import org.modetrail.model.GroundPoint;
+import org.modetrail.model.PixelPoint;
+import org.modetrail.video.Frame;
+import org.modetrail.video.VideoSource;
+
+/**
+ * The calibration screen in a real window on the road clip's frame 100: a robot clicks four surveyed points, their
+ * ground positions are typed into the table's editor, and the fit fills the errors column. Also saves a picture of
+ * the screen with all 30 points and the grid to /tmp/calibration-dialog.png, for looking at.
+ */
+class CalibrationDialogSwingTest {
+    private Robot robot;
+    private CalibrationDialog dialog;
+
+    @BeforeAll
+    static void needsADisplay() {
+        boolean x11 = !System.getProperty("os.name", "").startsWith("Linux")
+                || !System.getenv().getOrDefault("DISPLAY", "").isBlank();
+        Assumptions.assumeTrue(!GraphicsEnvironment.isHeadless() && x11, "no display (run with DISPLAY set)");
+    }
+
+    @AfterEach
+    void close() {
+        if (dialog != null) {
+            GuiActionRunner.execute(() -> dialog.dispose());
+        }
+        if (robot != null) {
+            robot.cleanUp();
+        }
+    }
+
+    static BufferedImage roadFrame() throws Exception {
+        try (VideoSource v = VideoSource.open(Path.of("..", "clips", "road.mp4"))) {
+            Frame f = v.frame(100);
+            BufferedImage img = new BufferedImage(f.width(), f.height(), BufferedImage.TYPE_INT_RGB);
+            img.setRGB(0, 0, f.width(), f.height(), f.rgb(), 0, f.width());
+            return img;
+        }
+    }
+
+    private void open(GroundCalibration existing, AtomicReference<GroundCalibration> stored) throws Exception {
+        BufferedImage img = roadFrame();
+        robot = BasicRobot.robotWithNewAwtHierarchy();
+        dialog = GuiActionRunner.execute(() -> {
+            CalibrationDialog d = new CalibrationDialog(null, img, existing, stored::set);
+            d.setSize(1500, 820);
+            d.setLocation(20, 20);
+            d.setVisible(true);
+            return d;
+        });
+        robot.waitForIdle();
+    }
+
+    @Test
+    void fourClickedPointsWithTypedGroundPositionsAreFitted() throws Exception {
+        AtomicReference<GroundCalibration> stored = new AtomicReference<>();
+        open(null, stored);
+        List<GroundPoint> road = CalibrationTableModelTest.roadPoints();
+        // Four points spread over the road: the first, last and two in between.
+        List<GroundPoint> four = List.of(road.get(0), road.get(9), road.get(20), road.get(29));
+        CalibrationDialog.Canvas canvas = dialog.canvas();
+        for (GroundPoint p : four) {
+            ViewTransform t = GuiActionRunner.execute(canvas::transform);
+            Point at = new Point((int) Math.round(t.toViewX(p.image().x())), (int) Math.round(t.toViewY(p.image().y())));
+            robot.click(canvas, at, MouseButton.LEFT_BUTTON, 1);
+        }
+        robot.waitForIdle();
+        assertEquals(4, GuiActionRunner.execute(() -> dialog.model().getRowCount()));
+        double scale = GuiActionRunner.execute(() -> canvas.transform().scale());
+        for (int r = 0; r < 4; r++) {
+            PixelPoint clicked = dialog.model().row(r).image();
+            assertTrue(Math.hypot(clicked.x() - four.get(r).image().x(), clicked.y() - four.get(r).image().y())
+                    <= 1 / scale + 0.01, "row " + r + " at " + clicked);
+            type(r, CalibrationTableModel.GROUND_X, four.get(r).world().x());
+            type(r, CalibrationTableModel.GROUND_Y, four.get(r).world().y());
+        }
+        robot.waitForIdle();
+        assertTrue(GuiActionRunner.execute(() -> dialog.model().calibration().isPresent()),
+                GuiActionRunner.execute(() -> dialog.messageArea().getText()));
+        robot.click(robot.finder().findByName(dialog, "fit", true));
+        robot.waitForIdle();
+        for (int r = 0; r < 4; r++) {
+            int row = r;
+            Object px = GuiActionRunner.execute(() -> dialog.table().getValueAt(row, CalibrationTableModel.ERROR_PX));
+            assertNotNull(px, "row " + r);
+            // 4 points fit exactly: their errors are ~0.
+            assertTrue((Double) px < 1e-3, "row " + r + ": " + px);
+        }
+        String msg = GuiActionRunner.execute(() -> dialog.messageArea().getText());
+        assertTrue(msg.contains("Only 4 points are used"), msg);
+        assertTrue(GuiActionRunner.execute(() -> dialog.canvas().grid().isPresent()));
+
+        // Delete the selected point from the keyboard: back to 3, no fit, a message instead of an exception.
+        GuiActionRunner.execute(() -> dialog.table().setRowSelectionInterval(1, 1));
+        robot.focusAndWaitForFocusGain(dialog.table());
+        robot.pressAndReleaseKeys(java.awt.event.KeyEvent.VK_DELETE);
+        robot.waitForIdle();
+        assertEquals(3, GuiActionRunner.execute(() -> dialog.model().getRowCount()));
+        assertTrue(GuiActionRunner.execute(() -> dialog.messageArea().getText()).contains("at least 4"));
+
+        robot.click(robot.finder().findByName(dialog, "fit", true));
+        robot.waitForIdle();
+        assertTrue(GuiActionRunner.execute(() -> dialog.messageArea().getText()).contains("at least 4"));
+        assertTrue(stored.get() == null);
+    }
+
+    /** Types a value into a table cell through the table's own editor, as the user does. */
+    private void type(int row, int column, double value) {
+        GuiActionRunner.execute(() -> {
+            assertTrue(dialog.table().editCellAt(row, column));
+            Component editor = dialog.table().getEditorComponent();
+            ((JTextField) editor).setText(Double.toString(value));
+            assertTrue(dialog.table().getCellEditor().stopCellEditing());
+        });
+    }
+
+    @Test
+    void screenshotWithTheThirtyPointsAndTheGrid() throws Exception {
+        GroundCalibration c = org.modetrail.calibration.HomographyFit.fit(CalibrationTableModelTest.roadPoints());
+        AtomicReference<GroundCalibration> stored = new AtomicReference<>();
+        open(c, stored);
+        assertEquals(30, GuiActionRunner.execute(() -> dialog.model().getRowCount()));
+        assertTrue(GuiActionRunner.execute(() -> dialog.canvas().grid().isPresent()));
+        robot.click(robot.finder().findByName(dialog, "store", true));
+        robot.waitForIdle();
+        assertNotNull(stored.get());
+        assertTrue(stored.get().rmsPixels() < 0.01);
+        BufferedImage shot = GuiActionRunner.execute(() -> {
+            BufferedImage b = new BufferedImage(dialog.getRootPane().getWidth(), dialog.getRootPane().getHeight(),
+                    BufferedImage.TYPE_INT_RGB);
+            java.awt.Graphics2D g = b.createGraphics();
+            dialog.getRootPane().paint(g);
+            g.dispose();
+            return b;
+        });
+        ImageIO.write(shot, "png", new java.io.File("/tmp/calibration-dialog.png"));
+    }
+}
