@@ -32,7 +32,8 @@ import org.modetrail.video.VideoSource;
 /**
  * The calibration screen in a real window on the road clip's frame 100: a robot clicks four surveyed points, their
  * ground positions are typed into the table's editor, and the fit fills the errors column. Also saves a picture of
- * the screen with all 30 points and the grid to /tmp/calibration-dialog.png, for looking at.
+ * the screen with all 30 points and the grid to target/screenshots/calibration-dialog.png (or
+ * -Dmodetrail.screenshotDir), for looking at.
  */
 class CalibrationDialogSwingTest {
     private Robot robot;
@@ -159,6 +160,9 @@ class CalibrationDialogSwingTest {
             g.dispose();
             return b;
         });
-        ImageIO.write(shot, "png", new java.io.File("/tmp/calibration-dialog.png"));
+        java.nio.file.Path shots = java.nio.file.Path.of(System.getProperty("modetrail.screenshotDir",
+                "target/screenshots"));
+        java.nio.file.Files.createDirectories(shots);
+        ImageIO.write(shot, "png", shots.resolve("calibration-dialog.png").toFile());
     }
 }
