@@ -76,6 +76,7 @@ class CalibrationDialogSwingTest {
             return d;
         });
         robot.waitForIdle();
+        ScreenWait.untilStill(dialog);
     }
 
     @Test

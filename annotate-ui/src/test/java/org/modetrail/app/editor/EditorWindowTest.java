@@ -52,7 +52,7 @@ class EditorWindowTest {
     private Preferences node;
 
     @BeforeEach
-    void start() {
+    void start() throws InterruptedException {
         boolean x11 = !System.getenv().getOrDefault("DISPLAY", "").isBlank();
         Assumptions.assumeTrue(!GraphicsEnvironment.isHeadless() && x11, "no display (CI runs this under Xvfb)");
         robot = BasicRobot.robotWithNewAwtHierarchy();
@@ -66,6 +66,7 @@ class EditorWindowTest {
             return w;
         });
         robot.waitForIdle();
+        ScreenWait.untilStill(window);
     }
 
     @AfterEach

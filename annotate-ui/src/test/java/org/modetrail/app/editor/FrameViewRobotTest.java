@@ -57,7 +57,7 @@ class FrameViewRobotTest {
     }
 
     @BeforeEach
-    void window() {
+    void window() throws InterruptedException {
         robot = BasicRobot.robotWithNewAwtHierarchy();
         view = GuiActionRunner.execute(() -> {
             FrameView v = new FrameView();
@@ -73,6 +73,7 @@ class FrameViewRobotTest {
             return v;
         });
         robot.waitForIdle();
+        ScreenWait.untilStill(view);
     }
 
     @AfterEach

@@ -72,6 +72,7 @@ class TimelineViewSwingTest {
         robot.waitForIdle();
         robot.delay(200);
         robot.waitForIdle();
+        ScreenWait.untilStill(frame);
     }
 
     @AfterEach
