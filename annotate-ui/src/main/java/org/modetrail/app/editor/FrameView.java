@@ -799,18 +799,8 @@ public class FrameView extends JComponent {
 
     // --------------------------------------------------------------------------------------------- look rules
 
-    /**
-     * Black on light colours, white on dark ones, whichever contrasts more by the WCAG 2 contrast ratio (the rule
-     * overlay videos use): the two are equal at relative luminance 0.179.
-     */
+    /** The text and halo colour that reads on {@code rgb} ({@link org.modetrail.overlay.Contrast}). */
     static Color textColourOn(int rgb) {
-        double l = 0.2126 * linear((rgb >> 16) & 0xFF) + 0.7152 * linear((rgb >> 8) & 0xFF)
-                + 0.0722 * linear(rgb & 0xFF);
-        return l > 0.179 ? Color.BLACK : Color.WHITE;
-    }
-
-    private static double linear(int channel) {
-        double c = channel / 255.0;
-        return c <= 0.04045 ? c / 12.92 : Math.pow((c + 0.055) / 1.055, 2.4);
+        return org.modetrail.overlay.Contrast.textColourOn(rgb);
     }
 }
