@@ -6,9 +6,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 
 import org.modetrail.model.GroundPoint;
@@ -49,7 +47,7 @@ public final class CalibrationPointsCsv {
                 throw new CsvFormatException(file, 1, "the file is empty; it needs the header "
                         + String.join(",", COLUMNS));
             }
-            Map<String, Integer> columns = columns(file, header.replace("\uFEFF", ""));
+            Map<String, Integer> columns = CsvLine.columns(file, header.replace("\uFEFF", ""), COLUMNS, List.of());
             String text;
             int line = 1;
             while ((text = in.readLine()) != null) {
@@ -85,33 +83,6 @@ public final class CalibrationPointsCsv {
         return points;
     }
 
-    private static Map<String, Integer> columns(Path file, String header) throws CsvFormatException {
-        Map<String, Integer> columns = new HashMap<>();
-        List<String> names;
-        try {
-            names = CsvLine.split(header);
-        } catch (IllegalArgumentException e) {
-            throw new CsvFormatException(file, 1, e.getMessage());
-        }
-        for (int i = 0; i < names.size(); i++) {
-            String name = names.get(i).toLowerCase(Locale.ROOT);
-            if (!COLUMNS.contains(name)) {
-                throw new CsvFormatException(file, 1, "unknown column '" + names.get(i) + "'; the columns are "
-                        + String.join(",", COLUMNS));
-            }
-            if (columns.put(name, i) != null) {
-                throw new CsvFormatException(file, 1, "column '" + name + "' appears twice");
-            }
-        }
-        for (String r : COLUMNS) {
-            if (!columns.containsKey(r)) {
-                throw new CsvFormatException(file, 1, "the header lacks column '" + r + "'; it needs "
-                        + String.join(",", COLUMNS));
-            }
-        }
-        return columns;
-    }
-
     private static GroundPoint parse(Path file, int line, String text, Map<String, Integer> columns, double width,
                                      double height) throws CsvFormatException {
         List<String> f;
@@ -123,10 +94,10 @@ public final class CalibrationPointsCsv {
         if (f.size() != columns.size()) {
             throw new CsvFormatException(file, line, "has " + f.size() + " fields, the header " + columns.size());
         }
-        double u = number(file, line, f, columns, "image_x");
-        double v = number(file, line, f, columns, "image_y");
-        double x = number(file, line, f, columns, "world_x_m");
-        double y = number(file, line, f, columns, "world_y_m");
+        double u = CsvLine.number(file, line, f, columns, "image_x");
+        double v = CsvLine.number(file, line, f, columns, "image_y");
+        double x = CsvLine.number(file, line, f, columns, "world_x_m");
+        double y = CsvLine.number(file, line, f, columns, "world_y_m");
         if (u < 0 || v < 0 || u > width || v > height) {
             throw new CsvFormatException(file, line, "the image point " + u + "," + v + " lies outside the "
                     + (int) width + "x" + (int) height + " frame");
@@ -134,18 +105,4 @@ public final class CalibrationPointsCsv {
         return new GroundPoint(new PixelPoint(u, v), new WorldPoint(x, y));
     }
 
-    private static double number(Path file, int line, List<String> f, Map<String, Integer> c, String name)
-            throws CsvFormatException {
-        String s = f.get(c.get(name));
-        try {
-            double v = Double.parseDouble(s);
-            if (!Double.isFinite(v) || s.contains(",")) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new CsvFormatException(file, line, name + " must be a number with a dot for decimals, got '" + s
-                    + "'");
-        }
-    }
 }

@@ -1,7 +1,11 @@
 package org.modetrail.format.csv;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
 
 /** Splits one line of comma-separated values (RFC 4180: fields may be quoted, "" is a quote inside quotes). */
 final class CsvLine {
@@ -48,5 +52,54 @@ final class CsvLine {
             return s;
         }
         return '"' + s.replace("\"", "\"\"") + '"';
+    }
+
+    /**
+     * The header's columns by name (lower case) to their position: every one of {@code required} must be there,
+     * {@code optional} ones may be, anything else or a name given twice is refused naming line 1.
+     */
+    static Map<String, Integer> columns(Path file, String header, List<String> required, List<String> optional)
+            throws CsvFormatException {
+        List<String> names;
+        try {
+            names = split(header);
+        } catch (IllegalArgumentException e) {
+            throw new CsvFormatException(file, 1, e.getMessage());
+        }
+        Map<String, Integer> columns = new HashMap<>();
+        for (int i = 0; i < names.size(); i++) {
+            String name = names.get(i).toLowerCase(Locale.ROOT);
+            if (!required.contains(name) && !optional.contains(name)) {
+                throw new CsvFormatException(file, 1, "unknown column '" + names.get(i) + "'; the columns are "
+                        + String.join(",", required) + (optional.isEmpty() ? ""
+                        : " and optionally " + String.join(",", optional)));
+            }
+            if (columns.put(name, i) != null) {
+                throw new CsvFormatException(file, 1, "column '" + name + "' appears twice");
+            }
+        }
+        for (String r : required) {
+            if (!columns.containsKey(r)) {
+                throw new CsvFormatException(file, 1, "the header lacks column '" + r + "'; it needs "
+                        + String.join(",", required));
+            }
+        }
+        return columns;
+    }
+
+    /** The number in column {@code name}: finite, with a dot for decimals whatever the locale. */
+    static double number(Path file, int line, List<String> f, Map<String, Integer> c, String name)
+            throws CsvFormatException {
+        String s = f.get(c.get(name));
+        try {
+            double v = Double.parseDouble(s);
+            if (!Double.isFinite(v) || s.contains(",")) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new CsvFormatException(file, line, name + " must be a number with a dot for decimals, got '" + s
+                    + "'");
+        }
     }
 }

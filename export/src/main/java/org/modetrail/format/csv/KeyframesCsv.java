@@ -6,10 +6,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 
@@ -46,7 +44,8 @@ public final class KeyframesCsv {
                 throw new CsvFormatException(file, 1, "the file is empty; it needs the header "
                         + String.join(",", REQUIRED));
             }
-            Map<String, Integer> columns = columns(file, header.replace("\uFEFF", ""));
+            Map<String, Integer> columns = CsvLine.columns(file, header.replace("\uFEFF", ""), REQUIRED,
+                    List.of("class"));
             Set<Long> seen = new HashSet<>();
             String text;
             int line = 1;
@@ -73,28 +72,6 @@ public final class KeyframesCsv {
         return rows;
     }
 
-    private static Map<String, Integer> columns(Path file, String header) throws CsvFormatException {
-        Map<String, Integer> columns = new HashMap<>();
-        List<String> names = CsvLine.split(header);
-        for (int i = 0; i < names.size(); i++) {
-            String name = names.get(i).toLowerCase(Locale.ROOT);
-            if (!REQUIRED.contains(name) && !name.equals("class")) {
-                throw new CsvFormatException(file, 1, "unknown column '" + names.get(i) + "'; the columns are "
-                        + String.join(",", REQUIRED) + " and optionally class");
-            }
-            if (columns.put(name, i) != null) {
-                throw new CsvFormatException(file, 1, "column '" + name + "' appears twice");
-            }
-        }
-        for (String r : REQUIRED) {
-            if (!columns.containsKey(r)) {
-                throw new CsvFormatException(file, 1, "the header lacks column '" + r + "'; it needs "
-                        + String.join(",", REQUIRED));
-            }
-        }
-        return columns;
-    }
-
     private static KeyframeRow parse(Path file, int line, String text, Map<String, Integer> columns, int width,
                                      int height, int frameCount) throws CsvFormatException {
         List<String> f;
@@ -108,10 +85,10 @@ public final class KeyframesCsv {
         }
         int trackId = integer(file, line, f, columns, "track_id");
         int frame = integer(file, line, f, columns, "frame");
-        double x = number(file, line, f, columns, "x");
-        double y = number(file, line, f, columns, "y");
-        double w = number(file, line, f, columns, "width");
-        double h = number(file, line, f, columns, "height");
+        double x = CsvLine.number(file, line, f, columns, "x");
+        double y = CsvLine.number(file, line, f, columns, "y");
+        double w = CsvLine.number(file, line, f, columns, "width");
+        double h = CsvLine.number(file, line, f, columns, "height");
         if (trackId < 1) {
             throw new CsvFormatException(file, line, "track_id must be 1 or more, got " + trackId);
         }
@@ -148,21 +125,6 @@ public final class KeyframesCsv {
             return Integer.parseInt(s);
         } catch (NumberFormatException e) {
             throw new CsvFormatException(file, line, name + " must be a whole number, got '" + s + "'");
-        }
-    }
-
-    private static double number(Path file, int line, List<String> f, Map<String, Integer> c, String name)
-            throws CsvFormatException {
-        String s = f.get(c.get(name));
-        try {
-            double v = Double.parseDouble(s);
-            if (!Double.isFinite(v) || s.contains(",")) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new CsvFormatException(file, line, name + " must be a number with a dot for decimals, got '" + s
-                    + "'");
         }
     }
 }
