@@ -98,10 +98,28 @@ final class FfmpegVideoSource implements VideoSource {
 
     @Override
     public synchronized Frame frame(int n) throws VideoException {
+        return fetch(n, null);
+    }
+
+    @Override
+    public synchronized Frame frame(int n, int[] into) throws VideoException {
+        int size = info.width() * info.height();
+        if (into.length < size) {
+            throw new IllegalArgumentException("pixel array holds " + into.length + " entries, a frame needs " + size);
+        }
+        return fetch(n, into);
+    }
+
+    /** Frame n into {@code into}, or into a new array that the cache keeps when {@code into} is null. */
+    private Frame fetch(int n, int[] into) throws VideoException {
         checkRange(n);
         Frame cached = cache.get(n);
         if (cached != null) {
-            return cached;
+            if (into == null) {
+                return cached;
+            }
+            System.arraycopy(cached.rgb(), 0, into, 0, info.width() * info.height());
+            return new Frame(n, cached.timeSeconds(), info.width(), info.height(), into);
         }
         if (unreadable.get(n)) {
             throw unreadable(n, "it could not be decoded before");
@@ -110,10 +128,12 @@ final class FfmpegVideoSource implements VideoSource {
         if (picture != null) {
             // Passed on the way to an earlier random access: convert it now that it is wanted.
             try {
-                int[] pixels = new int[info.width() * info.height()];
+                int[] pixels = into != null ? into : new int[info.width() * info.height()];
                 decoder.convert(picture, pixels);
                 Frame f = new Frame(n, index.timeSeconds(n), info.width(), info.height(), pixels);
-                cache.put(f);
+                if (into == null) {
+                    cache.put(f);
+                }
                 return f;
             } finally {
                 av_frame_free(picture);
@@ -121,10 +141,12 @@ final class FfmpegVideoSource implements VideoSource {
         }
         Frame[] found = new Frame[1];
         decodeRange(n, n + 1, f -> {
-            cache.put(f);
+            if (into == null) {
+                cache.put(f);
+            }
             found[0] = f;
             return true;
-        }, n - MAX_KEPT_BEHIND, true);
+        }, n - MAX_KEPT_BEHIND, true, into);
         if (found[0] == null) {
             unreadable.set(n);
             throw unreadable(n, "the decoder produced no picture for it");
@@ -141,27 +163,28 @@ final class FfmpegVideoSource implements VideoSource {
         if (from == to) {
             return;
         }
-        decodeRange(from, to, sink, to, false);
+        decodeRange(from, to, sink, to, false, null);
     }
 
     /**
      * Decodes frames [from, to) in order and hands those from {@code convertFrom} on (and every one in
      * [from, to)) to the sink, reporting frames the decoder skipped as unreadable. With {@code holdBehind} (random
      * access) every frame gets a pixel array of its own that the sink may keep; without, one array is reused.
+     * A non-null {@code into} is the array the (single) wanted frame is written to.
      */
-    private void decodeRange(int from, int to, FrameSink sink, int convertFrom, boolean holdBehind)
+    private void decodeRange(int from, int to, FrameSink sink, int convertFrom, boolean holdBehind, int[] into)
             throws VideoException {
         int key = index.keyframeAtOrBefore(from);
         // Frames before the wanted one are worth converting only when they come on the way anyway.
         int first = Math.max(Math.min(convertFrom, from), key);
         if (decoderPosition >= 0 && decoderPosition < from && key <= decoderPosition + 1) {
             // No keyframe between here and there: going on is never slower than a seek.
-            decodeForward(from, to, sink, first, true, holdBehind);
+            decodeForward(from, to, sink, first, true, holdBehind, into);
             return;
         }
         for (int attempt = 0; attempt < SEEK_ATTEMPTS; attempt++) {
             seekTo(key);
-            if (decodeForward(from, to, sink, first, false, holdBehind) == Outcome.DONE) {
+            if (decodeForward(from, to, sink, first, false, holdBehind, into) == Outcome.DONE) {
                 return;
             }
             if (key == 0) {
@@ -170,7 +193,7 @@ final class FfmpegVideoSource implements VideoSource {
             key = index.keyframeAtOrBefore(key - 1);
         }
         reopen();
-        decodeForward(from, to, sink, first, true, holdBehind);
+        decodeForward(from, to, sink, first, true, holdBehind, into);
     }
 
     private enum Outcome { DONE, LANDED_TOO_LATE }
@@ -179,11 +202,12 @@ final class FfmpegVideoSource implements VideoSource {
      * Decodes pictures until frame {@code to - 1} has been handed over. With {@code lateStartIsGap} false, a first
      * picture after the wanted one means the seek overshot and the caller should start earlier; with it true, the
      * frames skipped over are unreadable. For a random access ({@code holdBehind}), pictures before {@code from}
-     * are held unconverted for a later step back, and each frame handed over has a pixel array of its own.
+     * are held unconverted for a later step back, and each frame handed over has a pixel array of its own
+     * ({@code into} when given).
      */
     private Outcome decodeForward(int from, int to, FrameSink sink, int convertFrom, boolean lateStartIsGap,
-                                  boolean holdBehind) throws VideoException {
-        int[] pixels = null;
+                                  boolean holdBehind, int[] into) throws VideoException {
+        int[] pixels = into;
         int expected = from;
         boolean first = true;
         while (expected < to) {
@@ -228,7 +252,7 @@ final class FfmpegVideoSource implements VideoSource {
                 unreadable.set(missing);
                 sink.unreadable(missing, "the decoder produced no picture for it");
             }
-            if (pixels == null || holdBehind) {
+            if (pixels == null || (holdBehind && into == null)) {
                 pixels = new int[info.width() * info.height()];
             }
             decoder.convertTo(pixels);
@@ -265,6 +289,11 @@ final class FfmpegVideoSource implements VideoSource {
         decoder.stampPackets(stamps);
         decoderPosition = -1;
         firstTrusted = 0;
+    }
+
+    /** Frames in the decoded-frame cache (for tests). */
+    synchronized int cachedFrames() {
+        return cache.size();
     }
 
     private long frameBytes() {

@@ -49,6 +49,25 @@ public interface VideoSource extends AutoCloseable {
     Frame frame(int n) throws VideoException;
 
     /**
+     * Frame n written into the caller's own pixel array ({@code width * height} entries, reused from call to call
+     * by a viewer that steps through a video), without keeping it in the decoded-frame cache. The returned frame
+     * wraps {@code into}. Stepping with this allocates nothing per frame: a new 8 MB array per 1080p frame costs
+     * more than decoding it (fresh memory is zeroed and paged in, and the garbage collector is kept busy).
+     *
+     * @throws IllegalArgumentException  when {@code into} is smaller than a frame
+     * @throws VideoException            as {@link #frame(int)}
+     */
+    default Frame frame(int n, int[] into) throws VideoException {
+        Frame f = frame(n);
+        int size = f.width() * f.height();
+        if (into.length < size) {
+            throw new IllegalArgumentException("pixel array holds " + into.length + " entries, a frame needs " + size);
+        }
+        System.arraycopy(f.rgb(), 0, into, 0, size);
+        return new Frame(f.index(), f.timeSeconds(), f.width(), f.height(), into);
+    }
+
+    /**
      * Reads frames {@code from} (inclusive) to {@code to} (exclusive) in order, as fast as the decoder goes, without
      * filling the random-access cache. The sink's frame buffer is reused from call to call. Frames that cannot be
      * decoded are reported to {@link FrameSink#unreadable} and skipped.

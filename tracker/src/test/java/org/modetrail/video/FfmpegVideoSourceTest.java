@@ -103,6 +103,35 @@ class FfmpegVideoSourceTest {
         }
     }
 
+    @ParameterizedTest
+    @MethodSource("clips")
+    void framesIntoTheCallersArrayMatchFramesFromTheCacheAndAreNotKept(Path clip) throws Exception {
+        // A viewer's walk: forward steps, a jump, back steps over held pictures and past them, one array reused.
+        int[] walk = {10, 11, 12, 13, 90, 89, 88, 87, 86, 85, 84, 83, 82, 81, 80, 79, 50, 51, 119, 0};
+        try (FfmpegVideoSource viewer = (FfmpegVideoSource) VideoSource.open(clip, options());
+             VideoSource reference = VideoSource.open(clip, options())) {
+            int[] into = new int[NumberedClips.WIDTH * viewer.info().height()];
+            for (int n : walk) {
+                Frame f = viewer.frame(n, into);
+                assertTrue(f.rgb() == into, "frame " + n + " is written into the caller's array");
+                assertEquals(n, f.index());
+                assertEquals(n, NumberedClips.numberOf(f), "pixels of frame " + n);
+                assertArrayEquals(reference.frame(n).rgb(), into, "frame " + n + " against the cached path");
+            }
+            assertEquals(0, viewer.cachedFrames(), "the viewer's frames are its own, not the cache's");
+            viewer.frame(5);
+            assertEquals(5, NumberedClips.numberOf(viewer.frame(5, into)), "a cached frame is copied out");
+        }
+    }
+
+    @Test
+    void anArraySmallerThanAFrameIsRefused() throws Exception {
+        try (VideoSource v = VideoSource.open(mp4WithBFrames, options())) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> v.frame(3, new int[10]));
+            assertTrue(e.getMessage().contains("10"), e.getMessage());
+        }
+    }
+
     @Test
     void aSinkCanStopReadingEarly() throws Exception {
         try (VideoSource v = VideoSource.open(mp4WithBFrames, options())) {

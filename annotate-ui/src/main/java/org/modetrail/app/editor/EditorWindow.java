@@ -584,9 +584,9 @@ public final class EditorWindow extends JFrame {
         timeline.setCurrentFrame(f);
         double t = frames.video().index().timeSeconds(f);
         frameLabel.setText(String.format(Locale.ROOT, "frame %d / %d · %.3f s", f, frameCount() - 1, t));
-        frames.request(f, (got, img) -> SwingUtilities.invokeLater(() -> {
-            if (got == frame) {
-                frameView.showFrame(got, img);
+        frames.request(f, d -> SwingUtilities.invokeLater(() -> {
+            if (d.wanted() == frame) {
+                frameView.showFrame(d.wanted(), d.image(), d.shown());
             }
         }), msg -> SwingUtilities.invokeLater(() -> status.setText(msg)));
     }
@@ -725,9 +725,15 @@ public final class EditorWindow extends JFrame {
         if (frames == null || session == null) {
             return;
         }
-        frames.request(frame, (got, img) -> SwingUtilities.invokeLater(
-                () -> CalibrationDialog.forSession(this, img, session).setVisible(true)),
-                msg -> SwingUtilities.invokeLater(() -> status.setText(msg)));
+        frames.request(frame, d -> {
+            if (d.exact()) {
+                // The fetcher reuses its pictures: the screen gets a copy of its own.
+                BufferedImage copy = new BufferedImage(d.image().getWidth(), d.image().getHeight(),
+                        BufferedImage.TYPE_INT_RGB);
+                copy.getRaster().setDataElements(0, 0, d.image().getRaster());
+                SwingUtilities.invokeLater(() -> CalibrationDialog.forSession(this, copy, session).setVisible(true));
+            }
+        }, msg -> SwingUtilities.invokeLater(() -> status.setText(msg)));
     }
 
     private void deleteKeyframe() {

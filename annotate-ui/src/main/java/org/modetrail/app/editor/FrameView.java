@@ -105,6 +105,8 @@ public class FrameView extends JComponent {
 
     private BufferedImage image;
     private int frame = -1;
+    /** The frame whose picture is on screen: not {@link #frame} while a stand-in shows during a jump. */
+    private int pictureFrame = -1;
     private final List<Painted> painted = new ArrayList<>();
     private Integer selected;
     private ViewTransform transform = ViewTransform.IDENTITY;
@@ -201,9 +203,19 @@ public class FrameView extends JComponent {
      * zoom and pan, so stepping through frames stays where the user looks. A drag under way is dropped.
      */
     public void showFrame(int frameIndex, BufferedImage frameImage) {
+        showFrame(frameIndex, frameImage, frameIndex);
+    }
+
+    /**
+     * Shows frame {@code pictureIndex}'s picture for frame {@code frameIndex}: a stand-in while the exact picture is
+     * decoded after a jump. A stand-in is marked as such, shows no boxes (they belong to another picture) and takes
+     * no edits; zoom and pan still work.
+     */
+    public void showFrame(int frameIndex, BufferedImage frameImage, int pictureIndex) {
         if (frameIndex < 0) {
             throw new IllegalArgumentException("frame must be 0 or more, got " + frameIndex);
         }
+        pictureFrame = pictureIndex;
         boolean newSize = frameImage != null && (image == null || image.getWidth() != frameImage.getWidth()
                 || image.getHeight() != frameImage.getHeight());
         if (frameIndex != frame) {
@@ -336,6 +348,9 @@ public class FrameView extends JComponent {
             requestFocusInWindow();
             if (drag != Drag.NONE || image == null) {
                 return;
+            }
+            if (showsStandIn() && !SwingUtilities.isMiddleMouseButton(e) && !spaceDown) {
+                return; // no edits on another frame's picture; the exact one is on its way
             }
             pressX = lastX = e.getX();
             pressY = lastY = e.getY();
@@ -609,6 +624,10 @@ public class FrameView extends JComponent {
             g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             g2.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
+            if (showsStandIn()) {
+                paintStandInNote(g2);
+                return;
+            }
             paintBoxes(g2);
             if (drag == Drag.DRAW && preview != null && preview.box() != null) {
                 paintBand(g2, preview.box());
@@ -616,6 +635,29 @@ public class FrameView extends JComponent {
         } finally {
             g2.dispose();
         }
+    }
+
+    /** Whether the picture on screen is another frame's, shown while the wanted one is decoded. */
+    public boolean showsStandIn() {
+        return image != null && pictureFrame != frame;
+    }
+
+    /** A note in the top-left corner saying whose picture this is, in the theme's tooltip colours. */
+    private void paintStandInNote(Graphics2D g) {
+        String text = "showing frame " + pictureFrame + " while frame " + frame + " is decoded";
+        FontMetrics fm = g.getFontMetrics(getFont());
+        g.setFont(getFont());
+        int pad = 4;
+        int w = fm.stringWidth(text) + 2 * pad;
+        int h = fm.getAscent() + fm.getDescent() + 2 * pad;
+        Color back = UIManager.getColor("ToolTip.background");
+        Color fore = UIManager.getColor("ToolTip.foreground");
+        g.setColor(back != null ? back : Color.WHITE);
+        g.fillRect(pad, pad, w, h);
+        g.setColor(fore != null ? fore : Color.BLACK);
+        g.setStroke(thin);
+        g.drawRect(pad, pad, w, h);
+        g.drawString(text, 2 * pad, pad + pad + fm.getAscent());
     }
 
     /** The look and feel's panel colour, a step darker on light themes and a step lighter on dark ones. */
