@@ -37,9 +37,9 @@ public final class EditorBench {
             System.out.printf(Locale.ROOT, "reference: sequential decoding %.1f frames/s (%.2f ms a frame)%n",
                     decodeFps, 1000 / decodeFps);
             int start = Math.min(100, v.frameCount() / 3);
-            double[] forward = steps(fetcher, start, start + 40, 1);
-            double[] backKept = steps(fetcher, start + 40, start + 26, -1);
-            double[] backOlder = steps(fetcher, start + 25, start + 5, -1);
+            int span = Math.min(80, v.frameCount() - start - 1);
+            double[] forward = steps(fetcher, start, start + span, 1);
+            double[] back = steps(fetcher, start + span - 1, start, -1);
             double[] bareForward = new double[41];
             try (VideoSource bare = VideoSource.open(clip)) {
                 bare.frame(start + 100);
@@ -50,9 +50,11 @@ public final class EditorBench {
                 }
             }
             print("bare decoder: frame(n + 1) after frame(n)", bareForward, 1000 / decodeFps);
-            print("step forward (decoding on)", forward, 1000 / decodeFps);
-            print("step back over kept pictures", backKept, 1000 / decodeFps);
-            print("step back past them (decoder's step back)", backOlder, 1000 / decodeFps);
+            print("step forward", forward, 1000 / decodeFps);
+            print("step back", back, 1000 / decodeFps);
+            System.out.printf(Locale.ROOT, "  steps over 20 ms: %d of %d forward, %d of %d back (a step every %d ms, "
+                    + "as a held arrow key repeats; %d pictures kept)%n", over(forward, 20), forward.length,
+                    over(back, 20), back.length, STEP_EVERY_MS, fetcher.keptCapacity());
             Random r = new Random(7);
             int[] jumps = new int[20];
             for (int i = 0; i < jumps.length; i++) {
@@ -80,6 +82,13 @@ public final class EditorBench {
             for (int i = 0; i < jumps.length; i++) {
                 ratio[i] = editor[i] / fromKey[i];
             }
+            int worst = 0;
+            for (int i = 1; i < jumps.length; i++) {
+                worst = ratio[i] > ratio[worst] ? i : worst;
+            }
+            System.out.printf(Locale.ROOT, "  slowest against its keyframe distance: frame %d, %d frames after its "
+                    + "keyframe, %.1f ms (a bare decoder's seek to it %.1f ms)%n", jumps[worst],
+                    jumps[worst] - v.index().keyframeAtOrBefore(jumps[worst]), editor[worst], bare[worst]);
             Arrays.sort(ratio);
             System.out.printf(Locale.ROOT, "  (reference: a bare decoder's exact seek, median %.1f ms; exact frame "
                     + "against decoding from the preceding keyframe at the sequential rate: median %.2f, max %.2f)%n",
@@ -121,13 +130,34 @@ public final class EditorBench {
         return n[0] / ((System.nanoTime() - t0) / 1e9);
     }
 
+    /**
+     * Milliseconds between steps: X servers repeat a held key 25 times a second by default (xset's "rate 660 25";
+     * from memory of the X server's defaults, not measured here).
+     */
+    private static final int STEP_EVERY_MS = 40;
+
     private static double[] steps(FrameFetcher f, int from, int to, int dir) throws Exception {
         int n = Math.abs(to - from) + 1;
         double[] ms = new double[n];
         for (int i = 0; i < n; i++) {
+            long t0 = System.nanoTime();
             ms[i] = once(f, from + dir * i);
+            long rest = STEP_EVERY_MS - (System.nanoTime() - t0) / 1_000_000;
+            if (rest > 0) {
+                Thread.sleep(rest);
+            }
         }
         return ms;
+    }
+
+    private static int over(double[] ms, double limit) {
+        int n = 0;
+        for (double m : ms) {
+            if (m > limit) {
+                n++;
+            }
+        }
+        return n;
     }
 
     /** Milliseconds from asking for frame {@code n} to having its exact picture. */
