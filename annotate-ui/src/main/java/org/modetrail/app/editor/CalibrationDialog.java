@@ -43,7 +43,7 @@ import org.modetrail.model.Project;
 
 /**
  * The ground calibration screen: the frame, large, with the points on it (click to add one, drag to move it, Delete
- * to remove the selected one), the table of points where the user types each point's ground position, the fit's
+ * to remove the selected one; the wheel zooms about the cursor, a middle or right drag pans, F fits), the table of points where the user types each point's ground position, the fit's
  * errors and warnings, and, once a fit exists, the ground grid drawn over the picture. "Store in project" hands the
  * calibration to {@code store} (the window applies it through the session, so it can be undone).
  */
@@ -200,13 +200,24 @@ final class CalibrationDialog extends JDialog {
         }
     }
 
-    /** The picture fitted to the panel, with the points and, once fitted, the ground grid. */
+    /**
+     * The picture with the points and, once fitted, the ground grid: fitted to the panel until the user zooms (the
+     * wheel, about the cursor, to place a point on the pixel) or pans (middle or right button drag); F fits again.
+     */
     final class Canvas extends JComponent {
         /** View pixels within which a press picks up a point instead of adding one. */
         private static final double PICK = 8;
+        /** Zoom per wheel notch. */
+        private static final double ZOOM_STEP = 1.25;
+        private static final ViewTransform.Limits LIMITS = new ViewTransform.Limits(0.01, 32, 64);
         private final BufferedImage image;
         private GroundGrid grid;
         private int dragging = -1;
+        /** The view the user zoomed or panned to; null while the picture follows the panel's size. */
+        private ViewTransform zoomed;
+        private int panX;
+        private int panY;
+        private boolean panning;
 
         Canvas(BufferedImage image) {
             this.image = image;
@@ -216,6 +227,13 @@ final class CalibrationDialog extends JDialog {
                 @Override
                 public void mousePressed(MouseEvent e) {
                     requestFocusInWindow();
+                    if (e.getButton() == MouseEvent.BUTTON2 || e.getButton() == MouseEvent.BUTTON3) {
+                        panning = true;
+                        panX = e.getX();
+                        panY = e.getY();
+                        setCursor(java.awt.Cursor.getPredefinedCursor(java.awt.Cursor.MOVE_CURSOR));
+                        return;
+                    }
                     if (e.getButton() != MouseEvent.BUTTON1) {
                         return;
                     }
@@ -236,6 +254,13 @@ final class CalibrationDialog extends JDialog {
 
                 @Override
                 public void mouseDragged(MouseEvent e) {
+                    if (panning) {
+                        zoomed = transform().panBy(e.getX() - panX, e.getY() - panY);
+                        panX = e.getX();
+                        panY = e.getY();
+                        repaint();
+                        return;
+                    }
                     if (dragging >= 0) {
                         model.move(dragging, imagePoint(e), false);
                         repaint();
@@ -244,6 +269,11 @@ final class CalibrationDialog extends JDialog {
 
                 @Override
                 public void mouseReleased(MouseEvent e) {
+                    if (panning) {
+                        panning = false;
+                        setCursor(null);
+                        return;
+                    }
                     if (dragging >= 0) {
                         int r = dragging;
                         dragging = -1;
@@ -253,12 +283,35 @@ final class CalibrationDialog extends JDialog {
             };
             addMouseListener(mouse);
             addMouseMotionListener(mouse);
+            addMouseWheelListener(e -> zoomAbout(Math.pow(ZOOM_STEP, -e.getPreciseWheelRotation()), e.getX(),
+                    e.getY()));
+            getInputMap(JComponent.WHEN_FOCUSED).put(KeyStroke.getKeyStroke(KeyEvent.VK_F, 0), "fit");
+            getActionMap().put("fit", new AbstractAction("fit") {
+                @Override
+                public void actionPerformed(ActionEvent e) {
+                    fitToPanel();
+                }
+            });
         }
 
-        /** How the picture is shown now: the whole frame fitted to the panel. */
+        /** How the picture is shown now: as the user zoomed and panned it, else the whole frame fitted. */
         ViewTransform transform() {
-            return ViewTransform.fit(image.getWidth(), image.getHeight(), Math.max(1, getWidth()),
-                    Math.max(1, getHeight()), new ViewTransform.Limits(0.01, 32, 1));
+            int w = Math.max(1, getWidth());
+            int h = Math.max(1, getHeight());
+            return zoomed != null ? zoomed.clamped(image.getWidth(), image.getHeight(), w, h, LIMITS)
+                    : ViewTransform.fit(image.getWidth(), image.getHeight(), w, h, LIMITS);
+        }
+
+        /** Zooms by {@code factor} about a view point: the picture's point under it stays under it. */
+        void zoomAbout(double factor, double viewX, double viewY) {
+            zoomed = transform().zoomAbout(factor, viewX, viewY, LIMITS);
+            repaint();
+        }
+
+        /** Back to the whole frame, following the panel's size. */
+        void fitToPanel() {
+            zoomed = null;
+            repaint();
         }
 
         Optional<GroundGrid> grid() {
@@ -299,7 +352,10 @@ final class CalibrationDialog extends JDialog {
                 g.setColor(new Color(0x20, 0x20, 0x20));
                 g.fillRect(0, 0, getWidth(), getHeight());
                 ViewTransform t = transform();
-                g.setRenderingHint(RenderingHints.KEY_INTERPOLATION, RenderingHints.VALUE_INTERPOLATION_BILINEAR);
+                // Zoomed in past 2x, pixels show as squares, so a point can be put on the pixel it belongs to.
+                g.setRenderingHint(RenderingHints.KEY_INTERPOLATION, t.scale() >= FrameView.CRISP_FROM
+                        ? RenderingHints.VALUE_INTERPOLATION_NEAREST_NEIGHBOR
+                        : RenderingHints.VALUE_INTERPOLATION_BILINEAR);
                 g.drawImage(image, t.toAffine(), null);
                 g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
                 g.clipRect((int) Math.floor(t.toViewX(0)), (int) Math.floor(t.toViewY(0)),

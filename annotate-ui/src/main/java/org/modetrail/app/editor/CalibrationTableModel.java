@@ -164,7 +164,8 @@ final class CalibrationTableModel extends AbstractTableModel {
         indexRows();
         message = refit
                 ? "A fit needs at least 4 points with ground positions; " + complete + " so far. Click the picture to"
-                        + " add a point, then type its ground x and y (metres) in the table."
+                        + " add a point (the wheel zooms to place it on the pixel, a right-button drag pans, F fits the"
+                        + " frame again), then type its ground x and y (metres) in the table."
                 : "Moving a point…";
         fireTableRowsUpdated(0, Math.max(0, rows.size() - 1));
         fitListeners.forEach(Runnable::run);

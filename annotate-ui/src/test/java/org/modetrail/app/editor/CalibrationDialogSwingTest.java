@@ -141,6 +141,51 @@ class CalibrationDialogSwingTest {
         assertTrue(stored.get() == null);
     }
 
+    @Test
+    void theWheelZoomsAboutTheCursorSoAPointGoesOnThePixelAndFFitsAgain() throws Exception {
+        AtomicReference<GroundCalibration> stored = new AtomicReference<>();
+        open(null, stored);
+        CalibrationDialog.Canvas canvas = dialog.canvas();
+        GroundPoint p = CalibrationTableModelTest.roadPoints().get(12);
+        ViewTransform fitted = GuiActionRunner.execute(canvas::transform);
+        Point at = new Point((int) Math.round(fitted.toViewX(p.image().x())),
+                (int) Math.round(fitted.toViewY(p.image().y())));
+        robot.moveMouse(canvas, at);
+        robot.rotateMouseWheel(-8); // where the mouse is, eight notches towards the screen: 1.25^8 = 5.96x
+        robot.waitForIdle();
+        ViewTransform zoomed = GuiActionRunner.execute(canvas::transform);
+        assertEquals(fitted.scale() * Math.pow(1.25, 8), zoomed.scale(), 1e-6 * zoomed.scale());
+        // The picture's point under the cursor stayed under it (to within the cursor's whole pixel).
+        assertEquals(fitted.toImageX(at.x), zoomed.toImageX(at.x), 1e-6);
+        assertEquals(fitted.toImageY(at.y), zoomed.toImageY(at.y), 1e-6);
+        // Zoomed, a click lands within a sixth of a frame pixel of the surveyed point, not within a pixel or two.
+        Point on = new Point((int) Math.round(zoomed.toViewX(p.image().x())),
+                (int) Math.round(zoomed.toViewY(p.image().y())));
+        for (int attempt = 0; attempt < 2 && GuiActionRunner.execute(() -> dialog.model().getRowCount()) < 1;
+             attempt++) {
+            robot.click(canvas, on, MouseButton.LEFT_BUTTON, 1);
+            robot.waitForIdle();
+            Thread.sleep(700);
+        }
+        assertEquals(1, GuiActionRunner.execute(() -> dialog.model().getRowCount()));
+        PixelPoint clicked = dialog.model().row(0).image();
+        assertTrue(Math.hypot(clicked.x() - p.image().x(), clicked.y() - p.image().y()) <= 0.71 / zoomed.scale(),
+                "clicked at " + clicked + " for " + p.image() + " at scale " + zoomed.scale());
+        // A right-button drag pans by the drag.
+        robot.pressMouse(canvas, new Point(300, 300), MouseButton.RIGHT_BUTTON);
+        robot.moveMouse(canvas, new Point(340, 320));
+        robot.releaseMouse(MouseButton.RIGHT_BUTTON);
+        robot.waitForIdle();
+        ViewTransform panned = GuiActionRunner.execute(canvas::transform);
+        assertEquals(zoomed.offsetX() + 40, panned.offsetX(), 1e-6);
+        assertEquals(zoomed.offsetY() + 20, panned.offsetY(), 1e-6);
+        assertEquals(1, GuiActionRunner.execute(() -> dialog.model().getRowCount()), "panning adds no point");
+        robot.focusAndWaitForFocusGain(canvas);
+        robot.pressAndReleaseKeys(java.awt.event.KeyEvent.VK_F);
+        robot.waitForIdle();
+        assertEquals(fitted.scale(), GuiActionRunner.execute(canvas::transform).scale(), 1e-9);
+    }
+
     /** Types a value into a table cell through the table's own editor, as the user does. */
     private void type(int row, int column, double value) {
         GuiActionRunner.execute(() -> {
