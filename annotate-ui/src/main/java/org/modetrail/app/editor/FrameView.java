@@ -645,8 +645,10 @@ public class FrameView extends JComponent {
     /** A note in the top-left corner saying whose picture this is, in the theme's tooltip colours. */
     private void paintStandInNote(Graphics2D g) {
         String text = "showing frame " + pictureFrame + " while frame " + frame + " is decoded";
-        FontMetrics fm = g.getFontMetrics(getFont());
-        g.setFont(getFont());
+        if (getFont() != null) {
+            g.setFont(getFont());
+        }
+        FontMetrics fm = g.getFontMetrics();
         int pad = 4;
         int w = fm.stringWidth(text) + 2 * pad;
         int h = fm.getAscent() + fm.getDescent() + 2 * pad;

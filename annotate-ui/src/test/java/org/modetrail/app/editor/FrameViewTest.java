@@ -1,6 +1,7 @@
 package org.modetrail.app.editor;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -129,6 +130,19 @@ class FrameViewTest {
     @Test
     void fitsTheFrameAtFirst() {
         assertEquals(new ViewTransform(1.25, 0, 0), view.transform());
+    }
+
+    @Test
+    void aStandInPictureTakesNoEditsUntilTheExactOneComes() {
+        onEdt(() -> view.showFrame(5, grey(640, 480), 0));
+        assertTrue(view.showsStandIn());
+        drag(300, 100, 400, 200, MouseEvent.BUTTON1);
+        click(125, 125); // where track 1's box is on frame 0
+        assertEquals(List.of(), heard, "nothing drawn or selected on another frame's picture");
+        onEdt(() -> view.showFrame(5, grey(640, 480), 5));
+        assertFalse(view.showsStandIn());
+        drag(300, 100, 400, 200, MouseEvent.BUTTON1);
+        assertEquals(List.of("drawn 5 " + new Box(240, 80, 80, 80)), heard);
     }
 
     @Test
