@@ -46,7 +46,7 @@ final class OverlayPainter {
     private final Rectangle2D.Double rect = new Rectangle2D.Double();
     private final Ellipse2D.Double dot = new Ellipse2D.Double();
     /** The label tags drawn so far on the current frame. */
-    private final List<Rectangle2D> placed = new ArrayList<>();
+    private final TagPlacement tags = new TagPlacement();
 
     /** A track with what drawing it needs, worked out once. */
     private record Painted(Track track, Color colour, Color text, Color halo, ContactPoint trailPoint,
@@ -109,7 +109,7 @@ final class OverlayPainter {
             }
         }
         if (style.showLabels()) {
-            placed.clear();
+            tags.clear();
             g.setFont(font);
             FontMetrics fm = g.getFontMetrics();
             for (Painted p : tracks) {
@@ -183,36 +183,14 @@ final class OverlayPainter {
     }
 
     /**
-     * The id and class on a tag of the class colour, above the box's top-left corner; where that would cover a tag
-     * already drawn on this frame (or leave the picture), below the box, then inside its top, then stacked higher.
+     * The id and class on a tag of the class colour, placed by {@link TagPlacement}.
      */
     private void label(Graphics2D g, FontMetrics fm, Painted p, Box b) {
         int pad = Math.max(2, style.fontSize() / 5);
         int tw = fm.stringWidth(p.label()) + 2 * pad;
         int th = fm.getAscent() + fm.getDescent() + pad;
         double half = style.keyframeLineWidth() / 2 + 1;
-        double x = Math.max(0, Math.min(Math.floor(b.x() - half), width - tw));
-        double above = Math.floor(b.y() - half - th);
-        double[] candidates = {above, Math.ceil(b.bottom() + half), Math.ceil(b.y() + half), above - th - 1,
-            above - 2 * (th + 1)};
-        Rectangle2D.Double tag = null;
-        for (double y : candidates) {
-            if (y < 0 || y + th > height) {
-                continue;
-            }
-            Rectangle2D.Double r = new Rectangle2D.Double(x, y, tw, th);
-            if (tag == null) {
-                tag = r;
-            }
-            if (free(r)) {
-                tag = r;
-                break;
-            }
-        }
-        if (tag == null) {
-            tag = new Rectangle2D.Double(x, Math.max(0, Math.min(above, height - th)), tw, th);
-        }
-        placed.add(tag);
+        Rectangle2D.Double tag = tags.place(b.x(), b.y(), b.bottom(), half, tw, th, width, height);
         g.setColor(p.colour());
         g.fill(tag);
         g.setStroke(tagStroke);
@@ -223,12 +201,4 @@ final class OverlayPainter {
         g.drawString(p.label(), (float) (tag.x + pad), (float) (tag.y + pad / 2.0 + fm.getAscent()));
     }
 
-    private boolean free(Rectangle2D r) {
-        for (Rectangle2D other : placed) {
-            if (other.intersects(r)) {
-                return false;
-            }
-        }
-        return true;
-    }
 }

@@ -132,7 +132,7 @@ public class FrameView extends JComponent {
     private final Color bandShade = new Color(0, 0, 0, 160);
     private final Rectangle2D.Double rect = new Rectangle2D.Double();
     private final Rectangle2D.Double grab = new Rectangle2D.Double();
-    private final List<Rectangle2D.Double> tags = new ArrayList<>();
+    private final org.modetrail.overlay.TagPlacement tags = new org.modetrail.overlay.TagPlacement();
     private Font tagFont;
 
     /** A canvas with the default zoom limits and grips. */
@@ -713,7 +713,7 @@ public class FrameView extends JComponent {
             note = chosen.label() + " · " + (mark == Presence.HIDDEN ? "hidden here"
                     : mark == Presence.ABSENT ? "absent here" : "no box on this frame");
             noteTag = new Rectangle2D.Double(8, 8, fm.stringWidth(note) + 8, fm.getAscent() + fm.getDescent() + 2);
-            tags.add(noteTag);
+            tags.reserve(noteTag);
         }
         for (Painted p : painted) {
             if (p == chosen) {
@@ -782,28 +782,8 @@ public class FrameView extends JComponent {
         int pad = 3;
         int tw = fm.stringWidth(text) + 2 * pad;
         int th = fm.getAscent() + fm.getDescent() + 2;
-        double gap = KEY_WIDTH / 2 + 1;
-        double x = Math.max(0, Math.min(Math.floor(rect.x - gap), getWidth() - tw));
-        double above = Math.floor(rect.y - gap - th);
-        double[] ys = {above, Math.ceil(rect.y + rect.height + gap), Math.ceil(rect.y + gap)};
-        Rectangle2D.Double tag = null;
-        for (double y : ys) {
-            if (y < 0 || y + th > getHeight()) {
-                continue;
-            }
-            Rectangle2D.Double r = new Rectangle2D.Double(x, y, tw, th);
-            if (tag == null) {
-                tag = r;
-            }
-            if (free(r)) {
-                tag = r;
-                break;
-            }
-        }
-        if (tag == null) {
-            tag = new Rectangle2D.Double(x, Math.max(0, Math.min(above, getHeight() - th)), tw, th);
-        }
-        tags.add(tag);
+        Rectangle2D.Double tag = tags.place(rect.x, rect.y, rect.y + rect.height, KEY_WIDTH / 2 + 1, tw, th,
+                getWidth(), getHeight());
         drawTag(g, fm, p, tag, text, pad);
     }
 
@@ -816,15 +796,6 @@ public class FrameView extends JComponent {
         g.draw(grab);
         g.setColor(p.text());
         g.drawString(text, (float) (tag.x + pad), (float) (tag.y + 1 + fm.getAscent()));
-    }
-
-    private boolean free(Rectangle2D r) {
-        for (Rectangle2D other : tags) {
-            if (other.intersects(r)) {
-                return false;
-            }
-        }
-        return true;
     }
 
     /** The box being drawn: a dashed line over a solid halo, in the theme's text and background colours. */
