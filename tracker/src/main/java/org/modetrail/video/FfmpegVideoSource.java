@@ -72,6 +72,13 @@ final class FfmpegVideoSource implements VideoSource {
             entry = FrameIndexer.scan(file);
             indexCache.store(file, entry);
         }
+        if (entry.index().keyframeCount() == 0) {
+            decoder.close();
+            int n = entry.index().frameCount();
+            throw new VideoException(file, (n == 1 ? "its one frame is not" : "none of its " + n + " frames is")
+                    + " a keyframe, where decoding can start; the file is cut short or damaged: copy it again from "
+                    + "the original");
+        }
         VideoInfo info = VideoInfo.of(entry.width(), entry.height(), entry.index(), entry.codec(), entry.container());
         return new FfmpegVideoSource(file, options, entry, info, decoder);
     }

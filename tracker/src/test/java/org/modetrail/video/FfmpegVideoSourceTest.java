@@ -211,6 +211,15 @@ class FfmpegVideoSourceTest {
     }
 
     @Test
+    void aFileCutShortBeforeItsFirstWholeKeyframeIsRefusedWithItsName() throws Exception {
+        // The demo clip keeps its index at the start: its first 20 kB promise 450 frames but hold no whole keyframe.
+        byte[] bytes = Files.readAllBytes(Path.of("..", "clips", "arena.mp4"));
+        Path cut = Files.write(dir.resolve("cut.mp4"), java.util.Arrays.copyOf(bytes, 20_000));
+        VideoException e = assertThrows(VideoException.class, () -> VideoSource.open(cut, options()));
+        assertTrue(e.getMessage().contains("cut.mp4") && e.getMessage().contains("cut short"), e.getMessage());
+    }
+
+    @Test
     void aMissingFileIsRefusedWithItsName() {
         Path missing = dir.resolve("nowhere.mp4");
         VideoException e = assertThrows(VideoException.class, () -> VideoSource.open(missing, options()));

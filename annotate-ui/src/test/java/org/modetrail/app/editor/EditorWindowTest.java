@@ -200,6 +200,19 @@ class EditorWindowTest {
         robot.pressAndReleaseKey(KeyEvent.VK_ENTER);
         waitFor(() -> !error.isShowing(), "the message to close");
         assertEquals(450, GuiActionRunner.execute(() -> window.frameCount()), "the open clip is still there");
+
+        // A video cut short after its first 20 kB (a copy that did not finish): named, explained, nothing lost.
+        byte[] clip = Files.readAllBytes(CLIP);
+        Path cut = Files.write(dir.resolve("cut.mp4"), java.util.Arrays.copyOf(clip, 20_000));
+        GuiActionRunner.execute(() -> window.open(cut));
+        JDialog cutError = waitForDialog();
+        String cutText = GuiActionRunner.execute(() -> messageOf(cutError));
+        assertTrue(cutText.contains("cut.mp4"), cutText);
+        robot.pressAndReleaseKey(KeyEvent.VK_ENTER);
+        waitFor(() -> !cutError.isShowing(), "the message to close");
+        assertEquals(450, GuiActionRunner.execute(() -> window.frameCount()), "the open clip is still there");
+        assertTrue(GuiActionRunner.execute(() -> window.session().videoFile().getFileName().toString())
+                .equals("arena.mp4"));
     }
 
     private void control(int key) {
