@@ -89,6 +89,23 @@ public final class EditorWindow extends JFrame {
     private EditorSession session;
     private FrameFetcher frames;
     private ReviewQueue review;
+    /**
+     * Works out the timeline's lanes, the track list's figures and the review's spots for each new project version
+     * ({@link ProjectDigest}), off the event thread: on an hour-long video that takes longer than a screen refresh.
+     */
+    private final java.util.concurrent.ExecutorService digester = java.util.concurrent.Executors
+            .newSingleThreadExecutor(r -> {
+                Thread t = new Thread(r, "editor-digest");
+                t.setDaemon(true);
+                return t;
+            });
+    /** The newest project version waiting for its digest, or null when none waits. */
+    private final java.util.concurrent.atomic.AtomicReference<Pending> toDigest =
+            new java.util.concurrent.atomic.AtomicReference<>();
+    /** The digest last made (the digester thread's; unchanged tracks reuse its parts). */
+    private volatile ProjectDigest lastDigest;
+    /** Counts opened sessions, so a digest of a project no longer open is not shown. Event thread. */
+    private long generation;
     private int frame;
     private Integer selected;
     private String lastClass = "object";
@@ -124,6 +141,7 @@ public final class EditorWindow extends JFrame {
     @Override
     public void dispose() {
         java.awt.KeyboardFocusManager.getCurrentKeyboardFocusManager().removeKeyEventDispatcher(keys);
+        digester.shutdown();
         super.dispose();
     }
 
@@ -490,17 +508,54 @@ public final class EditorWindow extends JFrame {
             return;
         }
         frameView.setProject(p);
-        timeline.setProject(p, frameCount());
-        trackList.setProject(p, frameCount());
-        if (review == null) {
-            review = ReviewQueue.of(p, frameCount(), TrackQualitySummary.defaults());
-        } else {
-            review.rebuild(p, frameCount());
-        }
         if (selected != null && p.track(selected).isEmpty()) {
             select(null);
         }
         updateTitle();
+        if (toDigest.getAndSet(new Pending(p, frameCount(), generation)) == null) {
+            digester.submit(this::digestNewest);
+        }
+    }
+
+    /** A project version waiting for its digest: the video's frame count and the session it belongs to. */
+    private record Pending(Project project, int frameCount, long generation) {
+    }
+
+    /** On the digester thread: digests the newest waiting version, skipping those overtaken meanwhile. */
+    private void digestNewest() {
+        Pending p = toDigest.get();
+        while (p != null) {
+            ProjectDigest d;
+            try {
+                d = ProjectDigest.of(p.project(), p.frameCount(), timeline.config(), TrackQualitySummary.defaults(),
+                        lastDigest);
+            } catch (RuntimeException e) {
+                toDigest.set(null);
+                String message = "Could not update the timeline: " + e;
+                SwingUtilities.invokeLater(() -> status.setText(message));
+                return;
+            }
+            lastDigest = d;
+            if (toDigest.compareAndSet(p, null)) {
+                long gen = p.generation();
+                SwingUtilities.invokeLater(() -> digestShown(d, gen));
+                return;
+            }
+            p = toDigest.get(); // a newer version came while this one was worked out
+        }
+    }
+
+    private void digestShown(ProjectDigest d, long gen) {
+        if (session == null || gen != generation) {
+            return;
+        }
+        timeline.setDigest(d);
+        trackList.setDigest(d);
+        if (review == null) {
+            review = ReviewQueue.of(d.spots(), TrackQualitySummary.defaults());
+        } else {
+            review.rebuild(d.spots());
+        }
     }
 
     private void trackingShown(boolean running, long done, long total) {
@@ -547,6 +602,8 @@ public final class EditorWindow extends JFrame {
     private void closeSession() {
         player.stop();
         review = null;
+        generation++;
+        lastDigest = null;
         if (frames != null) {
             frames.close();
             frames = null;

@@ -70,6 +70,13 @@ public final class ReviewQueue {
         this.summary = summary;
     }
 
+    /** A queue of the given spots (in the documented order) with the cursor before the first. */
+    public static ReviewQueue of(List<Spot> spots, TrackQualitySummary summary) {
+        ReviewQueue q = new ReviewQueue(summary);
+        q.spots = List.copyOf(spots);
+        return q;
+    }
+
     /** A queue of {@code project}'s spots with the cursor before the first. */
     public static ReviewQueue of(Project project, int frameCount, TrackQualitySummary summary) {
         ReviewQueue q = new ReviewQueue(summary);
@@ -95,11 +102,16 @@ public final class ReviewQueue {
 
     /** Takes the spots of the changed project, keeping the cursor near where it was (see the class comment). */
     public void rebuild(Project project, int frameCount) {
+        rebuild(collect(project, frameCount, summary));
+    }
+
+    /** Takes spots collected elsewhere (in the documented order), keeping the cursor near where it was. */
+    public void rebuild(List<Spot> newSpots) {
         Optional<Spot> was = current();
         List<Spot> old = spots;
         int oldIndex = index;
         boolean wasBetween = between;
-        spots = collect(project, frameCount, summary);
+        spots = List.copyOf(newSpots);
         if (was.isPresent()) {
             Spot w = was.get();
             int same = sameSpot(w);

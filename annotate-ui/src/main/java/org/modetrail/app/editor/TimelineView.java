@@ -134,6 +134,24 @@ public final class TimelineView extends JComponent {
         if (frameCount <= 0) {
             throw new IllegalArgumentException("a timeline needs at least one frame, got " + frameCount);
         }
+        Map<Track, LaneModel> reused = frameCount == this.frameCount ? built : Map.of();
+        Map<Track, LaneModel> next = new IdentityHashMap<>();
+        for (Track t : p == null ? List.<Track>of() : p.tracks()) {
+            LaneModel m = reused.get(t);
+            next.put(t, m != null ? m : LaneModel.of(t, frameCount, config));
+        }
+        show(p, frameCount, next::get);
+    }
+
+    /**
+     * Shows a project whose lanes were worked out already (off the event thread, with this timeline's
+     * {@link #config()}): nothing is computed here but the order and colours.
+     */
+    public void setDigest(ProjectDigest d) {
+        show(d.project(), d.frameCount(), d::lane);
+    }
+
+    private void show(Project p, int frameCount, java.util.function.Function<Track, LaneModel> laneOf) {
         boolean newLength = frameCount != this.frameCount || lanes.length == 0;
         List<Track> sorted = new ArrayList<>(p == null ? List.of() : p.tracks());
         sorted.sort((a, b) -> Integer.compare(a.id(), b.id()));
@@ -142,10 +160,7 @@ public final class TimelineView extends JComponent {
         Color[] colours = new Color[sorted.size()];
         for (int i = 0; i < l.length; i++) {
             Track t = sorted.get(i);
-            LaneModel m = frameCount == this.frameCount ? built.get(t) : null;
-            if (m == null) {
-                m = LaneModel.of(t, frameCount, config);
-            }
+            LaneModel m = laneOf.apply(t);
             next.put(t, m);
             l[i] = m;
             colours[i] = new Color(p.objectClass(t.className()).map(ObjectClass::colour).orElse(0x999999));

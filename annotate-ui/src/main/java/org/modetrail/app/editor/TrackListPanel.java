@@ -123,14 +123,26 @@ public final class TrackListPanel extends JPanel {
 
     /** Lists {@code p}'s tracks over a video of {@code frameCount} frames, keeping the selected track selected. */
     public void setProject(Project p, int frameCount) {
+        Map<Track, TrackQuality> reused = frameCount == this.frameCount ? qualities : Map.of();
+        Map<Track, TrackQuality> next = new IdentityHashMap<>();
+        for (Track t : p == null ? List.<Track>of() : p.tracks()) {
+            TrackQuality q = reused.get(t);
+            next.put(t, q != null ? q : summary.of(t, frameCount));
+        }
+        show(p, frameCount, next::get);
+    }
+
+    /** Lists a project whose quality summaries were worked out already (off the event thread). */
+    public void setDigest(ProjectDigest d) {
+        show(d.project(), d.frameCount(), d::quality);
+    }
+
+    private void show(Project p, int frameCount, java.util.function.Function<Track, TrackQuality> qualityOf) {
         Integer selected = selectedTrack();
         Map<Track, TrackQuality> next = new IdentityHashMap<>();
         List<Row> rows = new ArrayList<>();
         for (Track t : p == null ? List.<Track>of() : p.tracks()) {
-            TrackQuality q = frameCount == this.frameCount ? qualities.get(t) : null;
-            if (q == null) {
-                q = summary.of(t, frameCount);
-            }
+            TrackQuality q = qualityOf.apply(t);
             next.put(t, q);
             int colour = p.objectClass(t.className()).map(ObjectClass::colour).orElse(0x999999);
             rows.add(new Row(t.id(), new ClassCell(t.className(), colour), q.keyframes() + q.tracked()

@@ -7,6 +7,7 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 import java.util.Random;
 import java.util.TreeMap;
@@ -187,17 +188,29 @@ public final class LongFileBench {
         private final AtomicBoolean running = new AtomicBoolean(true);
         private final Thread thread;
 
+        /** Where the event thread was when a posted task had waited longest (sampled after 100 ms). */
+        private volatile String stalledAt = "";
+        private volatile double stalledFor;
+
         private EventThreadProbe() {
             thread = new Thread(() -> {
                 while (running.get()) {
                     long t = System.nanoTime();
                     try {
-                        SwingUtilities.invokeAndWait(() -> { });
+                        java.util.concurrent.CountDownLatch ran = new java.util.concurrent.CountDownLatch(1);
+                        SwingUtilities.invokeLater(ran::countDown);
+                        if (!ran.await(100, java.util.concurrent.TimeUnit.MILLISECONDS)) {
+                            String where = eventThreadStack();
+                            ran.await();
+                            double waited = (System.nanoTime() - t) / 1e6;
+                            if (waited > stalledFor) {
+                                stalledFor = waited;
+                                stalledAt = where;
+                            }
+                        }
                         Thread.sleep(10);
                     } catch (InterruptedException e) {
                         return;
-                    } catch (java.lang.reflect.InvocationTargetException e) {
-                        throw new IllegalStateException(e);
                     }
                     synchronized (delays) {
                         delays.add((System.nanoTime() - t) / 1e6 - 10);
@@ -205,6 +218,22 @@ public final class LongFileBench {
                 }
             }, "event-thread-probe");
             thread.setDaemon(true);
+        }
+
+        private static String eventThreadStack() {
+            for (Map.Entry<Thread, StackTraceElement[]> e : Thread.getAllStackTraces().entrySet()) {
+                if (e.getKey().getName().startsWith("AWT-EventQueue")) {
+                    StringBuilder b = new StringBuilder();
+                    int shown = 0;
+                    for (StackTraceElement f : e.getValue()) {
+                        if (f.getClassName().startsWith("org.modetrail") && shown++ < 4) {
+                            b.append("\n      at ").append(f);
+                        }
+                    }
+                    return b.length() > 0 ? b.toString() : "\n      at " + e.getValue()[0];
+                }
+            }
+            return "";
         }
 
         static EventThreadProbe start() {
@@ -216,6 +245,10 @@ public final class LongFileBench {
         double[] stop() throws InterruptedException {
             running.set(false);
             thread.join();
+            if (stalledFor > 0) {
+                System.out.printf(Locale.ROOT, "  longest stall %.0f ms, the event thread sampled after 100 ms:%s%n",
+                        stalledFor, stalledAt);
+            }
             synchronized (delays) {
                 return delays.stream().mapToDouble(d -> Math.max(0, d)).toArray();
             }
