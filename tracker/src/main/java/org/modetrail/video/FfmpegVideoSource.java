@@ -53,7 +53,7 @@ final class FfmpegVideoSource implements VideoSource {
         this.held = new HeldPictures(Math.min(MAX_KEPT_BEHIND, cache.capacityFor(frameBytes()) / 2));
     }
 
-    static FfmpegVideoSource open(Path file, VideoOptions options) throws VideoException {
+    static FfmpegVideoSource open(Path file, VideoOptions options, IndexProgress progress) throws VideoException {
         if (!Files.isReadable(file)) {
             throw new VideoException(file, "the file cannot be read; check its permissions");
         }
@@ -63,13 +63,13 @@ final class FfmpegVideoSource implements VideoSource {
         if (cached.isPresent()) {
             entry = cached.get();
         } else {
-            entry = FrameIndexer.scan(file);
+            entry = FrameIndexer.scan(file, progress);
             indexCache.store(file, entry);
         }
         FfmpegDecoder decoder = FfmpegDecoder.open(file, options.decoderThreads());
         if (cached.isPresent() && (entry.width() != decoder.width() || entry.height() != decoder.height())) {
             // A cache entry that disagrees with the file itself is not believed.
-            entry = FrameIndexer.scan(file);
+            entry = FrameIndexer.scan(file, progress);
             indexCache.store(file, entry);
         }
         if (entry.index().keyframeCount() == 0) {

@@ -20,7 +20,20 @@ final class FrameIndexer {
     private FrameIndexer() {
     }
 
+    /** Packets between two progress reports. */
+    private static final int REPORT_EVERY = 2000;
+
     static IndexedVideo scan(Path file) throws VideoException {
+        return scan(file, IndexProgress.NONE);
+    }
+
+    static IndexedVideo scan(Path file, IndexProgress progress) throws VideoException {
+        long fileBytes;
+        try {
+            fileBytes = java.nio.file.Files.size(file);
+        } catch (java.io.IOException e) {
+            throw new VideoException(file, "its size cannot be read (" + e.getMessage() + ")");
+        }
         AVFormatContext format = FfmpegDecoder.openFormat(file);
         AVPacket packet = av_packet_alloc();
         try {
@@ -69,6 +82,9 @@ final class FrameIndexer {
                         pos = Arrays.copyOf(pos, n * 2);
                         dts = Arrays.copyOf(dts, n * 2);
                     }
+                    if (n % REPORT_EVERY == 0 && packet.pos() > 0) {
+                        progress.scanned(packet.pos(), fileBytes);
+                    }
                     pos[n] = packet.pos();
                     dts[n] = usedDts;
                     ts[n] = t;
@@ -81,6 +97,7 @@ final class FrameIndexer {
             if (n == 0) {
                 throw new VideoException(file, "the video stream holds no frames; the file may be truncated");
             }
+            progress.scanned(fileBytes, fileBytes);
             FrameIndex index = presentationOrder(ts, key, n, stream.time_base().num(), stream.time_base().den());
             if (fromDecodeTimestamps) {
                 index = alignToDecoder(file, index);

@@ -19,13 +19,18 @@ public interface VideoSource extends AutoCloseable {
 
     /** Opens a video file or a folder of numbered images. */
     static VideoSource open(Path path, VideoOptions options) throws VideoException {
+        return open(path, options, IndexProgress.NONE);
+    }
+
+    /** Opens a video file or a folder of numbered images, telling {@code progress} how the first scan goes. */
+    static VideoSource open(Path path, VideoOptions options, IndexProgress progress) throws VideoException {
         if (!Files.exists(path)) {
             throw new VideoException(path, "no such file or folder; check the path");
         }
         if (Files.isDirectory(path)) {
             return ImageSequenceSource.open(path, options);
         }
-        return FfmpegVideoSource.open(path, options);
+        return FfmpegVideoSource.open(path, options, progress);
     }
 
     /** The file or folder this reads. */

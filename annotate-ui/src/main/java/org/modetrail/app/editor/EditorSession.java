@@ -27,6 +27,8 @@ import org.modetrail.run.Span;
 import org.modetrail.run.TrackResults;
 import org.modetrail.run.TrackRunner;
 import org.modetrail.video.VideoException;
+import org.modetrail.video.IndexProgress;
+import org.modetrail.video.VideoOptions;
 import org.modetrail.video.VideoSource;
 
 /**
@@ -79,12 +81,12 @@ public final class EditorSession implements AutoCloseable {
     private int runningJobs;
 
     private EditorSession(Project project, Path projectFile, Path videoFile, AutosaveConfig autosaveConfig,
-                          boolean dirty) throws VideoException {
+                          boolean dirty, IndexProgress progress) throws VideoException {
         this.history = new History(project, HISTORY_DEPTH);
         this.projectFile = projectFile;
         this.videoFile = videoFile;
         this.autosaveConfig = autosaveConfig;
-        this.trackingVideo = VideoSource.open(videoFile);
+        this.trackingVideo = VideoSource.open(videoFile, VideoOptions.defaults(), progress);
         this.runner = new TrackRunner();
         this.dirty = dirty;
         this.autosave = new ProjectAutosave(projectFile, autosaveConfig, this::autosaveFailed);
@@ -96,7 +98,7 @@ public final class EditorSession implements AutoCloseable {
     /** A new, empty project on {@code video}, to be saved as {@code projectFile} (which need not exist). */
     public static EditorSession forVideo(Path video, VideoRef ref, Path projectFile, AutosaveConfig autosave)
             throws VideoException {
-        return new EditorSession(Project.of(ref), projectFile, video, autosave, false);
+        return new EditorSession(Project.of(ref), projectFile, video, autosave, false, IndexProgress.NONE);
     }
 
     /**
@@ -105,9 +107,16 @@ public final class EditorSession implements AutoCloseable {
      */
     public static EditorSession forProject(Path file, boolean recover, AutosaveConfig autosave)
             throws ProjectFileException, VideoException, IOException {
+        return forProject(file, recover, autosave, IndexProgress.NONE);
+    }
+
+    /** As {@link #forProject(Path, boolean, AutosaveConfig)}, telling {@code progress} how a first scan goes. */
+    public static EditorSession forProject(Path file, boolean recover, AutosaveConfig autosave,
+                                           IndexProgress progress)
+            throws ProjectFileException, VideoException, IOException {
         Project p = recover ? ProjectFile.read(ProjectAutosave.recoveryFile(file)) : ProjectFile.read(file);
         Path video = ProjectFile.videoPath(p, file);
-        return new EditorSession(p, file, video, autosave, recover);
+        return new EditorSession(p, file, video, autosave, recover, progress);
     }
 
     public void addListener(Listener l) {

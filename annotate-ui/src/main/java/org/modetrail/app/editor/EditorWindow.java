@@ -430,19 +430,32 @@ public final class EditorWindow extends JFrame {
             }
         }
         boolean useRecovery = recover;
+        // The first opening of a file scans its packets once (an hour of 1080p: seconds); say how far it got.
+        String name = file.getFileName().toString();
+        long[] shown = {0};
+        org.modetrail.video.IndexProgress scan = (done, total) -> {
+            long now = System.nanoTime();
+            if (now - shown[0] > 200_000_000L && total > 0) {
+                shown[0] = now;
+                int percent = (int) (100 * done / total);
+                SwingUtilities.invokeLater(() -> status.setText("Opening " + name + ": finding its frames, "
+                        + percent + "% (once per file)…"));
+            }
+        };
         new Thread(() -> {
             try {
                 EditorSession s;
                 if (project || Files.exists(projectFile) || useRecovery) {
                     s = Files.exists(projectFile) || useRecovery
-                            ? EditorSession.forProject(projectFile, useRecovery, AutosaveConfig.DEFAULT)
+                            ? EditorSession.forProject(projectFile, useRecovery, AutosaveConfig.DEFAULT, scan)
                             : null;
                 } else {
                     s = null;
                 }
                 if (s == null) {
                     VideoRef ref;
-                    try (VideoSource probe = VideoSource.open(file)) {
+                    try (VideoSource probe = VideoSource.open(file, org.modetrail.video.VideoOptions.defaults(),
+                            scan)) {
                         ref = new VideoRef(file.toAbsolutePath().toString(), probe.info().width(),
                                 probe.info().height(), probe.frameCount(), "");
                     }
