@@ -2,6 +2,7 @@ package org.modetrail.app;
 
 import org.modetrail.app.cli.BenchCommand;
 import org.modetrail.app.cli.CalibrateCommand;
+import org.modetrail.app.cli.EvalCommand;
 import org.modetrail.app.cli.ExportCommand;
 import org.modetrail.app.cli.ImportCommand;
 import org.modetrail.app.cli.OverlayCommand;
@@ -25,6 +26,7 @@ import picocli.CommandLine.Parameters;
 @Command(name = "modetrail", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Turns video of moving objects into corrected, analysis-ready trajectories.",
         subcommands = {TrackCommand.class, CalibrateCommand.class, SummaryCommand.class, ExportCommand.class,
+                EvalCommand.class,
                 ImportCommand.class, PlotCommand.class, OverlayCommand.class, InfoCommand.class, FrameCommand.class, DemoCommand.class, MakeDemoCommand.class,
                 BenchCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "With no command, the editor opens (on FILE, when given).",

@@ -132,6 +132,18 @@ final class Charts {
                 + " uncertainty" : null), false);
     }
 
+    /**
+     * Curves of y over x on fixed ranges (evaluation plots: success over the IoU threshold, precision over the
+     * centre error), one per series, in the series' colours with dashes and markers.
+     */
+    static Chart curves(List<PlotSeries> series, String title, String xLabel, String yLabel, Range x, Range y,
+                        PlotOptions o) {
+        XYPlot plot = trajectoryPlot(series, xLabel, yLabel, o);
+        plot.getDomainAxis().setRange(x);
+        plot.getRangeAxis().setRange(y);
+        return new Chart(chart(o.titleOr(title), plot, null), false);
+    }
+
     private static XYPlot trajectoryPlot(List<PlotSeries> series, String xLabel, String yLabel, PlotOptions o) {
         DefaultXYDataset data = new DefaultXYDataset();
         int[] steps = new int[series.size()];

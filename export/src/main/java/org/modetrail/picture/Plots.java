@@ -73,6 +73,17 @@ public final class Plots {
         writeSpeed(series, options, PlotFormat.SVG, out);
     }
 
+    /**
+     * Curves of y over x on the given fixed ranges, such as an evaluation's success plot (the fraction of frames
+     * above each IoU threshold) or precision plot; each series' {@code x} and {@code y} are the curve's points.
+     */
+    public static void writeCurves(List<PlotSeries> series, String title, String xLabel, String yLabel,
+                                   double xMin, double xMax, double yMin, double yMax, PlotOptions options,
+                                   PlotFormat format, Path out) throws IOException {
+        write(Charts.curves(List.copyOf(series), title, xLabel, yLabel, new org.jfree.data.Range(xMin, xMax),
+                new org.jfree.data.Range(yMin, yMax), options), options, format, out);
+    }
+
     private static void write(Charts.Chart c, PlotOptions o, PlotFormat format, Path out) throws IOException {
         if (c.equalScale()) {
             Charts.equaliseScale(c.chart(), o.width(), o.height());

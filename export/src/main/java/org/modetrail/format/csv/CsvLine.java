@@ -102,4 +102,15 @@ final class CsvLine {
                     + "'");
         }
     }
+
+    /** The whole number in column {@code name}. */
+    static int whole(Path file, int line, List<String> f, Map<String, Integer> c, String name)
+            throws CsvFormatException {
+        String s = f.get(c.get(name));
+        try {
+            return Integer.parseInt(s);
+        } catch (NumberFormatException e) {
+            throw new CsvFormatException(file, line, name + " must be a whole number, got '" + s + "'");
+        }
+    }
 }

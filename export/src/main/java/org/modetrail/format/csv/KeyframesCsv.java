@@ -83,8 +83,8 @@ public final class KeyframesCsv {
         if (f.size() != columns.size()) {
             throw new CsvFormatException(file, line, "has " + f.size() + " fields, the header " + columns.size());
         }
-        int trackId = integer(file, line, f, columns, "track_id");
-        int frame = integer(file, line, f, columns, "frame");
+        int trackId = CsvLine.whole(file, line, f, columns, "track_id");
+        int frame = CsvLine.whole(file, line, f, columns, "frame");
         double x = CsvLine.number(file, line, f, columns, "x");
         double y = CsvLine.number(file, line, f, columns, "y");
         double w = CsvLine.number(file, line, f, columns, "width");
@@ -116,15 +116,5 @@ public final class KeyframesCsv {
             }
         }
         return new KeyframeRow(line, trackId, frame, new Box(x, y, w, h), className);
-    }
-
-    private static int integer(Path file, int line, List<String> f, Map<String, Integer> c, String name)
-            throws CsvFormatException {
-        String s = f.get(c.get(name));
-        try {
-            return Integer.parseInt(s);
-        } catch (NumberFormatException e) {
-            throw new CsvFormatException(file, line, name + " must be a whole number, got '" + s + "'");
-        }
     }
 }

@@ -1,0 +1,110 @@
+package org.modetrail.format.csv;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.modetrail.evaluation.Annotations;
+import org.modetrail.evaluation.LabelledBox;
+import org.modetrail.model.Box;
+
+/**
+ * Reads the boxes of a ground truth or of tracks to evaluate, in the tracks CSV layout ({@value TracksCsv#HEADER}):
+ * only {@code track_id,frame,x,y,width,height} are needed; the other columns of that layout (and the ground
+ * columns of a calibrated export) may be there and are not used; a ground truth may carry {@code visible}, the
+ * visible fraction of the object from 0 to 1. Columns in any order; other names are refused so a typo does not
+ * pass unnoticed. Every problem names the file and the line.
+ */
+public final class EvaluationCsv {
+    private static final List<String> REQUIRED = List.of("track_id", "frame", "x", "y", "width", "height");
+    private static final List<String> OPTIONAL;
+    private static final int MAX_ROWS = 50_000_000;
+
+    static {
+        List<String> o = new ArrayList<>(List.of("visible", "class", "time_s", "source", "score"));
+        o.addAll(List.of(TracksCsv.GROUND_COLUMNS.split(",")));
+        OPTIONAL = List.copyOf(o);
+    }
+
+    private EvaluationCsv() {
+    }
+
+    /**
+     * @param what what the file is, for messages ("the truth", "the tracks")
+     */
+    public static Annotations read(Path file, String what) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            throw new CsvFormatException(file, 0, "no such file; check the path given for " + what);
+        }
+        List<LabelledBox> boxes = new ArrayList<>();
+        Map<Long, Integer> lineOf = new HashMap<>();
+        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            String header = in.readLine();
+            if (header == null || header.isBlank()) {
+                throw new CsvFormatException(file, 1, "the file is empty; it needs a header with at least "
+                        + String.join(",", REQUIRED));
+            }
+            Map<String, Integer> columns = CsvLine.columns(file, header.replace("\uFEFF", ""), REQUIRED, OPTIONAL);
+            String text;
+            int line = 1;
+            while ((text = in.readLine()) != null) {
+                line++;
+                if (text.isBlank()) {
+                    continue;
+                }
+                if (boxes.size() >= MAX_ROWS) {
+                    throw new CsvFormatException(file, line, "more than " + MAX_ROWS + " boxes");
+                }
+                LabelledBox b = parse(file, line, text, columns);
+                Integer before = lineOf.put(((long) b.id() << 32) | b.frame(), line);
+                if (before != null) {
+                    throw new CsvFormatException(file, line, "id " + b.id() + " already has a box on frame "
+                            + b.frame() + " (line " + before + "); keep one row per id and frame");
+                }
+                boxes.add(b);
+            }
+        } catch (java.nio.charset.MalformedInputException e) {
+            throw new CsvFormatException(file, 0, "is not UTF-8 text; save it as UTF-8 CSV");
+        }
+        return Annotations.of(boxes);
+    }
+
+    private static LabelledBox parse(Path file, int line, String text, Map<String, Integer> columns)
+            throws CsvFormatException {
+        List<String> f;
+        try {
+            f = CsvLine.split(text);
+        } catch (IllegalArgumentException e) {
+            throw new CsvFormatException(file, line, e.getMessage());
+        }
+        if (f.size() != columns.size()) {
+            throw new CsvFormatException(file, line, "has " + f.size() + " fields, the header " + columns.size());
+        }
+        int id = CsvLine.whole(file, line, f, columns, "track_id");
+        int frame = CsvLine.whole(file, line, f, columns, "frame");
+        double x = CsvLine.number(file, line, f, columns, "x");
+        double y = CsvLine.number(file, line, f, columns, "y");
+        double w = CsvLine.number(file, line, f, columns, "width");
+        double h = CsvLine.number(file, line, f, columns, "height");
+        if (frame < 0) {
+            throw new CsvFormatException(file, line, "frame must be 0 or more, got " + frame);
+        }
+        if (!(w > 0) || !(h > 0)) {
+            throw new CsvFormatException(file, line, "the box needs a positive width and height, got " + w + "x" + h);
+        }
+        double visible = 1;
+        if (columns.containsKey("visible")) {
+            visible = CsvLine.number(file, line, f, columns, "visible");
+            if (visible < 0 || visible > 1) {
+                throw new CsvFormatException(file, line, "visible must be between 0 and 1, got " + visible);
+            }
+        }
+        return new LabelledBox(id, frame, new Box(x, y, w, h), visible);
+    }
+}
