@@ -48,15 +48,21 @@ import org.modetrail.format.TracksFormat;
 import org.modetrail.format.project.AutosaveConfig;
 import org.modetrail.format.project.ProjectAutosave;
 import org.modetrail.format.project.ProjectFileException;
+import org.modetrail.format.project.ZonesFile;
+import org.modetrail.model.CountingLine;
 import org.modetrail.model.Box;
 import org.modetrail.model.Edit;
 import org.modetrail.model.Edits;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.ObjectClass;
+import org.modetrail.model.PixelPoint;
 import org.modetrail.model.Presence;
 import org.modetrail.model.Project;
+import org.modetrail.model.Site;
+import org.modetrail.model.SiteEdits;
 import org.modetrail.model.Track;
 import org.modetrail.model.VideoRef;
+import org.modetrail.model.Zone;
 import org.modetrail.quality.TrackQualitySummary;
 import org.modetrail.video.VideoException;
 import org.modetrail.video.VideoSource;
@@ -91,6 +97,7 @@ public final class EditorWindow extends JFrame {
     private ReviewQueue review;
     private int frame;
     private Integer selected;
+    private SiteItem selectedSite;
     private String lastClass = "object";
     private double playbackRate = 1;
 
@@ -234,11 +241,17 @@ public final class EditorWindow extends JFrame {
         add("Go", "Play or pause", "P", this::togglePlay);
         add("Go", "Play faster", "CLOSE_BRACKET", () -> setRate(playbackRate * 2));
         add("Go", "Play slower", "OPEN_BRACKET", () -> setRate(playbackRate / 2));
+        add("Zones", "Draw a zone (click its corners)", "Z", this::drawZone);
+        add("Zones", "Draw a counting line (drag from end to end)", "L", this::drawLine);
+        add("Zones", "Rename the selected zone or line…", "R", this::renameSiteItem);
+        add("Zones", "Delete the selected zone or line", "shift DELETE", this::deleteSiteItem);
+        add("Zones", "Import zones and lines from a file…", "control I", this::chooseZonesFile);
+        add("View", "Show or hide zones and lines", "V", this::toggleSite);
         add("View", "Light or dark theme", "control T", this::toggleTheme);
         add("View", "Keys", "F1", this::showHelp);
 
         JMenuBar bar = new JMenuBar();
-        for (String menu : List.of("File", "Edit", "Go", "View")) {
+        for (String menu : List.of("File", "Edit", "Zones", "Go", "View")) {
             JMenu m = new JMenu(menu);
             m.setName("menu" + menu);
             for (Command c : commands) {
@@ -339,6 +352,31 @@ public final class EditorWindow extends JFrame {
             public void message(String text) {
                 status.setText(text);
             }
+
+            @Override
+            public void zoneDrawn(List<PixelPoint> corners) {
+                nameAndAdd(SiteItem.Kind.ZONE, corners);
+            }
+
+            @Override
+            public void lineDrawn(PixelPoint from, PixelPoint to) {
+                nameAndAdd(SiteItem.Kind.LINE, List.of(from, to));
+            }
+
+            @Override
+            public void siteSelected(SiteItem item) {
+                selectSite(item);
+            }
+
+            @Override
+            public void zoneChanged(String name, List<PixelPoint> polygon) {
+                edit(p -> SiteEdits.reshapeZone(p, name, polygon));
+            }
+
+            @Override
+            public void lineChanged(String name, PixelPoint from, PixelPoint to) {
+                edit(p -> SiteEdits.moveLine(p, name, from, to));
+            }
         });
         timeline.addListener(new TimelineView.Listener() {
             @Override
@@ -355,6 +393,9 @@ public final class EditorWindow extends JFrame {
     }
 
     private void select(Integer id) {
+        if (id != null && selectedSite != null) {
+            selectSite(null);
+        }
         selected = id;
         frameView.setSelectedTrack(id);
         timeline.setSelectedTrack(id);
@@ -499,6 +540,9 @@ public final class EditorWindow extends JFrame {
         }
         if (selected != null && p.track(selected).isEmpty()) {
             select(null);
+        }
+        if (selectedSite != null && SiteHandles.points(p.site(), selectedSite) == null) {
+            selectSite(null);
         }
         updateTitle();
     }
@@ -737,6 +781,10 @@ public final class EditorWindow extends JFrame {
     }
 
     private void deleteKeyframe() {
+        if (selected == null && selectedSite != null) {
+            deleteSiteItem(); // Delete on a selected zone or line deletes it, as Shift+Delete does
+            return;
+        }
         Track t = selectedTrack();
         if (t != null) {
             edit(p -> Edits.deleteKeyframe(p, t.id(), frame));
@@ -896,6 +944,189 @@ public final class EditorWindow extends JFrame {
             String message = done;
             SwingUtilities.invokeLater(() -> status.setText(message));
         }, "editor-export").start();
+    }
+
+    // ---------------------------------------------------------------- zones and counting lines
+
+    private void drawZone() {
+        if (session != null) {
+            select(null);
+            selectSite(null);
+            frameView.requestFocusInWindow();
+            frameView.startZoneTool();
+        }
+    }
+
+    private void drawLine() {
+        if (session != null) {
+            select(null);
+            selectSite(null);
+            frameView.requestFocusInWindow();
+            frameView.startLineTool();
+        }
+    }
+
+    private void selectSite(SiteItem item) {
+        selectedSite = item;
+        frameView.setSelectedSite(item);
+        if (item != null) {
+            select(null);
+            status.setText("Selected " + item.describe() + ": drag its " + (item.kind() == SiteItem.Kind.ZONE
+                    ? "corners" : "ends") + " or its outline to move them; R renames it, Shift+Delete deletes it");
+        }
+    }
+
+    /** Asks for the name of a zone or line just drawn and adds it; a taken name is asked again, nothing is lost. */
+    private void nameAndAdd(SiteItem.Kind kind, List<PixelPoint> points) {
+        if (session == null) {
+            return;
+        }
+        Site site = session.project().site();
+        String suggested = kind == SiteItem.Kind.ZONE ? SiteEdits.freeZoneName(site) : SiteEdits.freeLineName(site);
+        String name = askSiteName(kind, "Name of the new " + kind.word() + ":", suggested, null);
+        if (name == null) {
+            frameView.dropDrawnSite();
+            status.setText("No " + kind.word() + " added");
+            return;
+        }
+        SiteItem item = new SiteItem(kind, name);
+        Project before = session.project();
+        edit(p -> kind == SiteItem.Kind.ZONE ? SiteEdits.addZone(p, new Zone(name, points))
+                : SiteEdits.addLine(p, new CountingLine(name, points.get(0), points.get(1))));
+        if (session.project() == before) {
+            frameView.dropDrawnSite(); // refused: the status line says why
+            return;
+        }
+        selectSite(item);
+        status.setText("Added " + item.describe() + " (Ctrl+Z takes it back); the summary counts "
+                + (kind == SiteItem.Kind.ZONE ? "the time tracks spend in it" : "the tracks crossing it"));
+    }
+
+    /**
+     * Asks for a name until it is one no other zone (or line) has; null when the user cancels. {@code own} is the
+     * item's present name when renaming.
+     */
+    private String askSiteName(SiteItem.Kind kind, String question, String suggested, String own) {
+        String message = question;
+        String value = suggested;
+        while (true) {
+            javax.swing.JTextField field = new javax.swing.JTextField(value, 24);
+            field.setName("siteName");
+            field.selectAll();
+            field.addAncestorListener(new javax.swing.event.AncestorListener() {
+                @Override
+                public void ancestorAdded(javax.swing.event.AncestorEvent e) {
+                    SwingUtilities.invokeLater(field::requestFocusInWindow);
+                }
+
+                @Override
+                public void ancestorRemoved(javax.swing.event.AncestorEvent e) {
+                }
+
+                @Override
+                public void ancestorMoved(javax.swing.event.AncestorEvent e) {
+                }
+            });
+            int answer = JOptionPane.showConfirmDialog(this, new Object[] {message, field},
+                    "Name of the " + kind.word(), JOptionPane.OK_CANCEL_OPTION, JOptionPane.QUESTION_MESSAGE);
+            frameView.requestFocusInWindow();
+            if (answer != JOptionPane.OK_OPTION) {
+                return null;
+            }
+            String name = field.getText().strip();
+            Site site = session.project().site();
+            boolean taken = !name.equals(own) && SiteHandles.points(site, new SiteItem(kind,
+                    name.isEmpty() ? "?" : name)) != null;
+            if (name.isEmpty()) {
+                message = "A " + kind.word() + " needs a name:";
+            } else if (taken) {
+                message = "There is a " + kind.word() + " named '" + name + "' already; choose another name:";
+            } else {
+                return name;
+            }
+            status.setText(message.substring(0, message.length() - 1));
+            value = name.isEmpty() ? suggested : name;
+        }
+    }
+
+    private SiteItem selectedSiteItem() {
+        if (session == null || selectedSite == null) {
+            status.setText("Select a zone or a counting line first (click its outline, or inside a zone)");
+            return null;
+        }
+        return selectedSite;
+    }
+
+    private void renameSiteItem() {
+        SiteItem item = selectedSiteItem();
+        if (item == null) {
+            return;
+        }
+        String name = askSiteName(item.kind(), "New name of " + item.describe() + ":", item.name(), item.name());
+        if (name == null || name.equals(item.name())) {
+            return;
+        }
+        Project before = session.project();
+        edit(p -> item.kind() == SiteItem.Kind.ZONE ? SiteEdits.renameZone(p, item.name(), name)
+                : SiteEdits.renameLine(p, item.name(), name));
+        if (session.project() != before) {
+            selectSite(new SiteItem(item.kind(), name));
+            status.setText("Renamed " + item.describe() + " to '" + name + "'");
+        }
+    }
+
+    private void deleteSiteItem() {
+        SiteItem item = selectedSiteItem();
+        if (item == null) {
+            return;
+        }
+        edit(p -> item.kind() == SiteItem.Kind.ZONE ? SiteEdits.removeZone(p, item.name())
+                : SiteEdits.removeLine(p, item.name()));
+        selectSite(null);
+        status.setText("Deleted " + item.describe() + " (Ctrl+Z brings it back)");
+    }
+
+    private void toggleSite() {
+        boolean show = !frameView.siteVisible();
+        if (!show) {
+            selectSite(null);
+        }
+        frameView.setSiteVisible(show);
+        status.setText(show ? "Zones and counting lines shown" : "Zones and counting lines hidden (V shows them)");
+    }
+
+    private void chooseZonesFile() {
+        if (session == null) {
+            return;
+        }
+        JFileChooser chooser = new JFileChooser(session.projectFile().getParent().toFile());
+        chooser.setDialogTitle("Import zones and counting lines (a zones file, .json)");
+        if (chooser.showOpenDialog(this) == JFileChooser.APPROVE_OPTION) {
+            importZones(chooser.getSelectedFile().toPath());
+        }
+    }
+
+    /** Adds the zones and lines of a zones file to the project (same names replaced), as one undoable edit. */
+    void importZones(Path file) {
+        if (session == null) {
+            return;
+        }
+        Site given;
+        try {
+            given = ZonesFile.read(file);
+        } catch (ProjectFileException e) {
+            status.setText("Not imported: " + e.getMessage());
+            return;
+        }
+        edit(p -> SiteEdits.merge(p, given));
+        frameView.setSiteVisible(true);
+        status.setText("Imported " + given.zones().size() + " zones and " + given.lines().size()
+                + " counting lines from " + file.getFileName() + " (same names replaced; Ctrl+Z takes it back)");
+    }
+
+    /** The zone or line selected, for tests. */
+    SiteItem selectedSiteForTest() {
+        return selectedSite;
     }
 
     // ---------------------------------------------------------------- theme and help
