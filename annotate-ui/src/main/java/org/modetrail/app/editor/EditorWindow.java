@@ -227,6 +227,11 @@ public final class EditorWindow extends JFrame {
                 session.cancelTracking();
             }
         });
+        add("Zones", "Draw a zone (click its corners)", "Z", this::drawZone);
+        add("Zones", "Draw a counting line (drag from end to end)", "L", this::drawLine);
+        add("Zones", "Rename the selected zone or line…", "R", this::renameSiteItem);
+        add("Zones", "Delete the selected zone or line", "shift DELETE", this::deleteSiteItem);
+        add("Zones", "Import zones and lines from a file…", "control I", this::chooseZonesFile);
         add("Go", "Next frame", "RIGHT", () -> step(1));
         add("Go", "Previous frame", "LEFT", () -> step(-1));
         add("Go", "Ten frames on", "shift RIGHT", () -> step(10));
@@ -241,11 +246,6 @@ public final class EditorWindow extends JFrame {
         add("Go", "Play or pause", "P", this::togglePlay);
         add("Go", "Play faster", "CLOSE_BRACKET", () -> setRate(playbackRate * 2));
         add("Go", "Play slower", "OPEN_BRACKET", () -> setRate(playbackRate / 2));
-        add("Zones", "Draw a zone (click its corners)", "Z", this::drawZone);
-        add("Zones", "Draw a counting line (drag from end to end)", "L", this::drawLine);
-        add("Zones", "Rename the selected zone or line…", "R", this::renameSiteItem);
-        add("Zones", "Delete the selected zone or line", "shift DELETE", this::deleteSiteItem);
-        add("Zones", "Import zones and lines from a file…", "control I", this::chooseZonesFile);
         add("View", "Show or hide zones and lines", "V", this::toggleSite);
         add("View", "Light or dark theme", "control T", this::toggleTheme);
         add("View", "Keys", "F1", this::showHelp);
@@ -1127,6 +1127,11 @@ public final class EditorWindow extends JFrame {
     /** The zone or line selected, for tests. */
     SiteItem selectedSiteForTest() {
         return selectedSite;
+    }
+
+    /** Selects a zone or line as a click on it would (for the screenshots). */
+    void selectSiteForTest(SiteItem item) {
+        selectSite(item);
     }
 
     // ---------------------------------------------------------------- theme and help
