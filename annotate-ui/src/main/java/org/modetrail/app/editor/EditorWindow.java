@@ -1010,30 +1010,14 @@ public final class EditorWindow extends JFrame {
         String message = question;
         String value = suggested;
         while (true) {
-            javax.swing.JTextField field = new javax.swing.JTextField(value, 24);
-            field.setName("siteName");
-            field.selectAll();
-            field.addAncestorListener(new javax.swing.event.AncestorListener() {
-                @Override
-                public void ancestorAdded(javax.swing.event.AncestorEvent e) {
-                    SwingUtilities.invokeLater(field::requestFocusInWindow);
-                }
-
-                @Override
-                public void ancestorRemoved(javax.swing.event.AncestorEvent e) {
-                }
-
-                @Override
-                public void ancestorMoved(javax.swing.event.AncestorEvent e) {
-                }
-            });
-            int answer = JOptionPane.showConfirmDialog(this, new Object[] {message, field},
-                    "Name of the " + kind.word(), JOptionPane.OK_CANCEL_OPTION, JOptionPane.QUESTION_MESSAGE);
+            // The option pane's own text field: it takes the focus with the name selected, so typing replaces it.
+            Object answer = JOptionPane.showInputDialog(this, message, "Name of the " + kind.word(),
+                    JOptionPane.QUESTION_MESSAGE, null, null, value);
             frameView.requestFocusInWindow();
-            if (answer != JOptionPane.OK_OPTION) {
+            if (answer == null) {
                 return null;
             }
-            String name = field.getText().strip();
+            String name = answer.toString().strip();
             Site site = session.project().site();
             boolean taken = !name.equals(own) && SiteHandles.points(site, new SiteItem(kind,
                     name.isEmpty() ? "?" : name)) != null;
