@@ -48,8 +48,6 @@ import org.modetrail.format.TracksFormat;
 import org.modetrail.format.project.AutosaveConfig;
 import org.modetrail.format.project.ProjectAutosave;
 import org.modetrail.format.project.ProjectFileException;
-import org.modetrail.format.project.ZonesFile;
-import org.modetrail.model.CountingLine;
 import org.modetrail.model.Box;
 import org.modetrail.model.Edit;
 import org.modetrail.model.Edits;
@@ -58,11 +56,9 @@ import org.modetrail.model.ObjectClass;
 import org.modetrail.model.PixelPoint;
 import org.modetrail.model.Presence;
 import org.modetrail.model.Project;
-import org.modetrail.model.Site;
 import org.modetrail.model.SiteEdits;
 import org.modetrail.model.Track;
 import org.modetrail.model.VideoRef;
-import org.modetrail.model.Zone;
 import org.modetrail.quality.TrackQualitySummary;
 import org.modetrail.video.VideoException;
 import org.modetrail.video.VideoSource;
@@ -97,7 +93,27 @@ public final class EditorWindow extends JFrame {
     private ReviewQueue review;
     private int frame;
     private Integer selected;
-    private SiteItem selectedSite;
+    private final SiteCommands site = new SiteCommands(this, frameView, new SiteCommands.Host() {
+        @Override
+        public EditorSession session() {
+            return session;
+        }
+
+        @Override
+        public void edit(Function<Project, Edit> op) {
+            EditorWindow.this.edit(op);
+        }
+
+        @Override
+        public void status(String text) {
+            status.setText(text);
+        }
+
+        @Override
+        public void deselectTrack() {
+            select(null);
+        }
+    });
     private String lastClass = "object";
     private double playbackRate = 1;
 
@@ -227,11 +243,11 @@ public final class EditorWindow extends JFrame {
                 session.cancelTracking();
             }
         });
-        add("Zones", "Draw a zone (click its corners)", "Z", this::drawZone);
-        add("Zones", "Draw a counting line (drag from end to end)", "L", this::drawLine);
-        add("Zones", "Rename the selected zone or line…", "R", this::renameSiteItem);
-        add("Zones", "Delete the selected zone or line", "shift DELETE", this::deleteSiteItem);
-        add("Zones", "Import zones and lines from a file…", "control I", this::chooseZonesFile);
+        add("Zones", "Draw a zone (click its corners)", "Z", site::drawZone);
+        add("Zones", "Draw a counting line (drag from end to end)", "L", site::drawLine);
+        add("Zones", "Rename the selected zone or line…", "R", site::rename);
+        add("Zones", "Delete the selected zone or line", "shift DELETE", site::delete);
+        add("Zones", "Import zones and lines from a file…", "control I", site::chooseFile);
         add("Go", "Next frame", "RIGHT", () -> step(1));
         add("Go", "Previous frame", "LEFT", () -> step(-1));
         add("Go", "Ten frames on", "shift RIGHT", () -> step(10));
@@ -246,7 +262,7 @@ public final class EditorWindow extends JFrame {
         add("Go", "Play or pause", "P", this::togglePlay);
         add("Go", "Play faster", "CLOSE_BRACKET", () -> setRate(playbackRate * 2));
         add("Go", "Play slower", "OPEN_BRACKET", () -> setRate(playbackRate / 2));
-        add("View", "Show or hide zones and lines", "V", this::toggleSite);
+        add("View", "Show or hide zones and lines", "V", site::toggleShown);
         add("View", "Light or dark theme", "control T", this::toggleTheme);
         add("View", "Keys", "F1", this::showHelp);
 
@@ -355,17 +371,17 @@ public final class EditorWindow extends JFrame {
 
             @Override
             public void zoneDrawn(List<PixelPoint> corners) {
-                nameAndAdd(SiteItem.Kind.ZONE, corners);
+                site.nameAndAdd(SiteItem.Kind.ZONE, corners);
             }
 
             @Override
             public void lineDrawn(PixelPoint from, PixelPoint to) {
-                nameAndAdd(SiteItem.Kind.LINE, List.of(from, to));
+                site.nameAndAdd(SiteItem.Kind.LINE, List.of(from, to));
             }
 
             @Override
             public void siteSelected(SiteItem item) {
-                selectSite(item);
+                site.select(item);
             }
 
             @Override
@@ -393,8 +409,8 @@ public final class EditorWindow extends JFrame {
     }
 
     private void select(Integer id) {
-        if (id != null && selectedSite != null) {
-            selectSite(null);
+        if (id != null && site.selected() != null) {
+            site.select(null);
         }
         selected = id;
         frameView.setSelectedTrack(id);
@@ -405,6 +421,21 @@ public final class EditorWindow extends JFrame {
     /** Selects a track as a click on it would (for the screenshots). */
     void selectTrackForTest(int id) {
         select(id);
+    }
+
+    /** Selects a zone or line as a click on it would (for the screenshots). */
+    void selectSiteForTest(SiteItem item) {
+        site.select(item);
+    }
+
+    /** The zone or line selected, for tests. */
+    SiteItem selectedSiteForTest() {
+        return site.selected();
+    }
+
+    /** Imports a zones file as the Zones menu's command does, without the file chooser (for tests). */
+    void importZones(Path file) {
+        site.importFile(file);
     }
 
     private void selectAndShow(int id) {
@@ -541,9 +572,7 @@ public final class EditorWindow extends JFrame {
         if (selected != null && p.track(selected).isEmpty()) {
             select(null);
         }
-        if (selectedSite != null && SiteHandles.points(p.site(), selectedSite) == null) {
-            selectSite(null);
-        }
+        site.projectShown(p);
         updateTitle();
     }
 
@@ -781,8 +810,8 @@ public final class EditorWindow extends JFrame {
     }
 
     private void deleteKeyframe() {
-        if (selected == null && selectedSite != null) {
-            deleteSiteItem(); // Delete on a selected zone or line deletes it, as Shift+Delete does
+        if (selected == null && site.selected() != null) {
+            site.delete(); // Delete on a selected zone or line deletes it, as Shift+Delete does
             return;
         }
         Track t = selectedTrack();
@@ -944,178 +973,6 @@ public final class EditorWindow extends JFrame {
             String message = done;
             SwingUtilities.invokeLater(() -> status.setText(message));
         }, "editor-export").start();
-    }
-
-    // ---------------------------------------------------------------- zones and counting lines
-
-    private void drawZone() {
-        if (session != null) {
-            select(null);
-            selectSite(null);
-            frameView.requestFocusInWindow();
-            frameView.startZoneTool();
-        }
-    }
-
-    private void drawLine() {
-        if (session != null) {
-            select(null);
-            selectSite(null);
-            frameView.requestFocusInWindow();
-            frameView.startLineTool();
-        }
-    }
-
-    private void selectSite(SiteItem item) {
-        selectedSite = item;
-        frameView.setSelectedSite(item);
-        if (item != null) {
-            select(null);
-            status.setText("Selected " + item.describe() + ": drag its " + (item.kind() == SiteItem.Kind.ZONE
-                    ? "corners" : "ends") + " or its outline to move them; R renames it, Shift+Delete deletes it");
-        }
-    }
-
-    /** Asks for the name of a zone or line just drawn and adds it; a taken name is asked again, nothing is lost. */
-    private void nameAndAdd(SiteItem.Kind kind, List<PixelPoint> points) {
-        if (session == null) {
-            return;
-        }
-        Site site = session.project().site();
-        String suggested = kind == SiteItem.Kind.ZONE ? SiteEdits.freeZoneName(site) : SiteEdits.freeLineName(site);
-        String name = askSiteName(kind, "Name of the new " + kind.word() + ":", suggested, null);
-        if (name == null) {
-            frameView.dropDrawnSite();
-            status.setText("No " + kind.word() + " added");
-            return;
-        }
-        SiteItem item = new SiteItem(kind, name);
-        Project before = session.project();
-        edit(p -> kind == SiteItem.Kind.ZONE ? SiteEdits.addZone(p, new Zone(name, points))
-                : SiteEdits.addLine(p, new CountingLine(name, points.get(0), points.get(1))));
-        if (session.project() == before) {
-            frameView.dropDrawnSite(); // refused: the status line says why
-            return;
-        }
-        selectSite(item);
-        status.setText("Added " + item.describe() + " (Ctrl+Z takes it back); the summary counts "
-                + (kind == SiteItem.Kind.ZONE ? "the time tracks spend in it" : "the tracks crossing it"));
-    }
-
-    /**
-     * Asks for a name until it is one no other zone (or line) has; null when the user cancels. {@code own} is the
-     * item's present name when renaming.
-     */
-    private String askSiteName(SiteItem.Kind kind, String question, String suggested, String own) {
-        String message = question;
-        String value = suggested;
-        while (true) {
-            // The option pane's own text field: it takes the focus with the name selected, so typing replaces it.
-            Object answer = JOptionPane.showInputDialog(this, message, "Name of the " + kind.word(),
-                    JOptionPane.QUESTION_MESSAGE, null, null, value);
-            frameView.requestFocusInWindow();
-            if (answer == null) {
-                return null;
-            }
-            String name = answer.toString().strip();
-            Site site = session.project().site();
-            boolean taken = !name.equals(own) && SiteHandles.points(site, new SiteItem(kind,
-                    name.isEmpty() ? "?" : name)) != null;
-            if (name.isEmpty()) {
-                message = "A " + kind.word() + " needs a name:";
-            } else if (taken) {
-                message = "There is a " + kind.word() + " named '" + name + "' already; choose another name:";
-            } else {
-                return name;
-            }
-            status.setText(message.substring(0, message.length() - 1));
-            value = name.isEmpty() ? suggested : name;
-        }
-    }
-
-    private SiteItem selectedSiteItem() {
-        if (session == null || selectedSite == null) {
-            status.setText("Select a zone or a counting line first (click its outline, or inside a zone)");
-            return null;
-        }
-        return selectedSite;
-    }
-
-    private void renameSiteItem() {
-        SiteItem item = selectedSiteItem();
-        if (item == null) {
-            return;
-        }
-        String name = askSiteName(item.kind(), "New name of " + item.describe() + ":", item.name(), item.name());
-        if (name == null || name.equals(item.name())) {
-            return;
-        }
-        Project before = session.project();
-        edit(p -> item.kind() == SiteItem.Kind.ZONE ? SiteEdits.renameZone(p, item.name(), name)
-                : SiteEdits.renameLine(p, item.name(), name));
-        if (session.project() != before) {
-            selectSite(new SiteItem(item.kind(), name));
-            status.setText("Renamed " + item.describe() + " to '" + name + "'");
-        }
-    }
-
-    private void deleteSiteItem() {
-        SiteItem item = selectedSiteItem();
-        if (item == null) {
-            return;
-        }
-        edit(p -> item.kind() == SiteItem.Kind.ZONE ? SiteEdits.removeZone(p, item.name())
-                : SiteEdits.removeLine(p, item.name()));
-        selectSite(null);
-        status.setText("Deleted " + item.describe() + " (Ctrl+Z brings it back)");
-    }
-
-    private void toggleSite() {
-        boolean show = !frameView.siteVisible();
-        if (!show) {
-            selectSite(null);
-        }
-        frameView.setSiteVisible(show);
-        status.setText(show ? "Zones and counting lines shown" : "Zones and counting lines hidden (V shows them)");
-    }
-
-    private void chooseZonesFile() {
-        if (session == null) {
-            return;
-        }
-        JFileChooser chooser = new JFileChooser(session.projectFile().getParent().toFile());
-        chooser.setDialogTitle("Import zones and counting lines (a zones file, .json)");
-        if (chooser.showOpenDialog(this) == JFileChooser.APPROVE_OPTION) {
-            importZones(chooser.getSelectedFile().toPath());
-        }
-    }
-
-    /** Adds the zones and lines of a zones file to the project (same names replaced), as one undoable edit. */
-    void importZones(Path file) {
-        if (session == null) {
-            return;
-        }
-        Site given;
-        try {
-            given = ZonesFile.read(file);
-        } catch (ProjectFileException e) {
-            status.setText("Not imported: " + e.getMessage());
-            return;
-        }
-        edit(p -> SiteEdits.merge(p, given));
-        frameView.setSiteVisible(true);
-        status.setText("Imported " + given.zones().size() + " zones and " + given.lines().size()
-                + " counting lines from " + file.getFileName() + " (same names replaced; Ctrl+Z takes it back)");
-    }
-
-    /** The zone or line selected, for tests. */
-    SiteItem selectedSiteForTest() {
-        return selectedSite;
-    }
-
-    /** Selects a zone or line as a click on it would (for the screenshots). */
-    void selectSiteForTest(SiteItem item) {
-        selectSite(item);
     }
 
     // ---------------------------------------------------------------- theme and help

@@ -54,7 +54,14 @@ import org.modetrail.model.Track;
  * empty space draws a box; a left click on a box selects its track (and a drag from there moves it), a click on
  * empty space clears the selection; a drag inside the selected box moves it, on a grip resizes it; a double click on
  * empty space fits the frame to the view. Keys (when the canvas has focus): F fits, Space held pans, Escape drops
- * the drag under way. Edited boxes are kept inside the frame ({@link BoxHandles}). Use on the event thread only.
+ * the drag under way. Edited boxes are kept inside the frame ({@link BoxHandles}).
+ *
+ * <p>The project's zones and counting lines are drawn under the boxes on every frame ({@link SitePainter}) unless
+ * hidden; their tools, selection and drags are {@link SiteLayer}'s. While a zone or line tool is on, left clicks
+ * belong to it, boxes included (Enter closes a zone, Backspace takes back a corner, Escape drops the drawing).
+ * Otherwise the selected zone's or line's corners and ends come first, then boxes, then the outlines of zones and
+ * lines (a click selects one, a drag moves it whole); a click, not a drag, inside a zone selects it. A track and a
+ * zone or line are never selected together. Use on the event thread only.
  */
 public class FrameView extends JComponent {
 

@@ -86,9 +86,13 @@ final class SitePainter {
     void zone(Graphics2D g, ViewTransform t, String name, List<PixelPoint> corners, boolean selected) {
         int s = selected ? 1 : 0;
         Path2D.Double path = path(t, corners, true);
+        if (!path.intersects(-CAP, -CAP, viewWidth + 2 * CAP, viewHeight + 2 * CAP)) {
+            return; // out of view, and so is its label
+        }
         Shape clip = g.getClip();
         g.clip(path);
-        java.awt.Rectangle b = path.getBounds();
+        // Hatch only what is in view: zoomed in, a zone can be many times the view's size.
+        java.awt.Rectangle b = path.getBounds().intersection(new java.awt.Rectangle(0, 0, viewWidth, viewHeight));
         // Diagonal hatch, "/": lines of slope -1 spaced along x, anchored to the view so it does not crawl.
         int first = Math.floorDiv(b.x - b.height, HATCH_SPACING) * HATCH_SPACING;
         for (int pass = 0; pass < 2; pass++) {
@@ -122,6 +126,10 @@ final class SitePainter {
         double bx = t.toViewX(to.x()), by = t.toViewY(to.y());
         double len = Math.hypot(bx - ax, by - ay);
         if (len == 0) {
+            return;
+        }
+        if (!new Line2D.Double(ax, ay, bx, by).intersects(-ARROW, -ARROW, viewWidth + 2 * ARROW,
+                viewHeight + 2 * ARROW)) {
             return;
         }
         double dx = (bx - ax) / len, dy = (by - ay) / len;

@@ -357,6 +357,19 @@ class SiteDrawingWindowTest {
         waitFor(() -> project().site().zones().size() == 1, "the deletion");
         control(KeyEvent.VK_Z);
         waitFor(() -> project().site().zones().size() == 2, "undo of the deletion");
+        // A zones file adds its zones and lines (the same name replaces); a broken one is refused with its line.
+        Path zones = Files.writeString(dir.resolve("zones.json"), "{\"zones\": [{\"name\": \"nest\", \"polygon\": "
+                + "[[10, 10], [90, 10], [50, 80]]}],\n \"lines\": [{\"name\": \"gate\", \"from\": [0, 200], "
+                + "\"to\": [640, 200]}]}");
+        GuiActionRunner.execute(() -> window.importZones(zones));
+        waitFor(() -> project().site().lines().size() == 1, "the import");
+        assertEquals(List.of("nest", "den"), project().site().zones().stream().map(Zone::name).toList());
+        assertEquals(3, project().site().zones().get(0).polygon().size(), "nest replaced by the file's");
+        Path broken = Files.writeString(dir.resolve("broken.json"), "{\"zones\": [{\"name\": \"x\",\n \"polygon\": 3");
+        GuiActionRunner.execute(() -> window.importZones(broken));
+        assertTrue(status().startsWith("Not imported") && status().contains("broken.json"), status());
+        assertEquals(1, project().site().lines().size(), "nothing changed");
+
         // V hides them: a click inside the zone then selects nothing.
         key(KeyEvent.VK_V);
         assertFalse(GuiActionRunner.execute(() -> frameView().siteVisible()));
