@@ -60,6 +60,8 @@ final class SiteLayer {
     private final List<PixelPoint> corners = new ArrayList<>();
     private PixelPoint lineStart;
     private boolean linePressed, lineFirstPress;
+    /** A press closed the zone: it is handed over on the release, so no dialog opens between press and release. */
+    private boolean closeOnRelease;
     private double pointerX = Double.NaN, pointerY = Double.NaN;
     /** A shape drawn and handed over, shown until the window answers with a site or drops it. */
     private List<PixelPoint> pending;
@@ -131,6 +133,7 @@ final class SiteLayer {
         lineStart = null;
         linePressed = false;
         tool = t;
+        closeOnRelease = false;
         visible = true;
         selected = null;
         repaintAll();
@@ -143,6 +146,7 @@ final class SiteLayer {
         }
         tool = Tool.NONE;
         corners.clear();
+        closeOnRelease = false;
         lineStart = null;
         linePressed = false;
         repaintAll();
@@ -166,7 +170,7 @@ final class SiteLayer {
         ViewTransform t = host.transform();
         if (tool == Tool.ZONE) {
             if (clicks >= 2 || (corners.size() >= 3 && handles.nearestPoint(List.of(corners.get(0)), t, x, y) == 0)) {
-                finishZone();
+                closeOnRelease = true;
                 return;
             }
             if (!corners.isEmpty() && handles.nearestPoint(List.of(corners.get(corners.size() - 1)), t, x, y) == 0) {
@@ -187,6 +191,11 @@ final class SiteLayer {
     }
 
     void releaseTool(int x, int y) {
+        if (tool == Tool.ZONE && closeOnRelease) {
+            closeOnRelease = false;
+            finishZone();
+            return;
+        }
         if (tool != Tool.LINE || !linePressed) {
             return;
         }
