@@ -13,7 +13,7 @@ import java.util.function.UnaryOperator;
  */
 public final class SiteEdits {
     /** Below this area (square image pixels) a zone's corners are taken to lie on one line. */
-    static final double MIN_AREA = 1;
+    public static final double MIN_AREA = 1;
 
     private SiteEdits() {
     }

@@ -282,6 +282,7 @@ public class FrameView extends JComponent {
         frame = frameIndex;
         image = frameImage;
         if (newSize) {
+            site.cancelTool(); // another video: a zone or line half drawn on the last one is dropped
             following = true;
             fitToView();
         }

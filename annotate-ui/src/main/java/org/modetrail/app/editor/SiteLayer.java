@@ -235,7 +235,7 @@ final class SiteLayer {
                     + " so far: click more corners, or Escape to cancel");
             return;
         }
-        if (SiteEdits.area(corners) < 1) {
+        if (SiteEdits.area(corners) < SiteEdits.MIN_AREA) {
             host.listener().message("these corners lie on one line and enclose nothing: click a corner off the line,"
                     + " or Backspace to take one back");
             return;
