@@ -53,8 +53,10 @@ import org.modetrail.model.Edit;
 import org.modetrail.model.Edits;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.ObjectClass;
+import org.modetrail.model.PixelPoint;
 import org.modetrail.model.Presence;
 import org.modetrail.model.Project;
+import org.modetrail.model.SiteEdits;
 import org.modetrail.model.Track;
 import org.modetrail.model.VideoRef;
 import org.modetrail.quality.TrackQualitySummary;
@@ -108,6 +110,27 @@ public final class EditorWindow extends JFrame {
     private long generation;
     private int frame;
     private Integer selected;
+    private final SiteCommands site = new SiteCommands(this, frameView, new SiteCommands.Host() {
+        @Override
+        public EditorSession session() {
+            return session;
+        }
+
+        @Override
+        public void edit(Function<Project, Edit> op) {
+            EditorWindow.this.edit(op);
+        }
+
+        @Override
+        public void status(String text) {
+            status.setText(text);
+        }
+
+        @Override
+        public void deselectTrack() {
+            select(null);
+        }
+    });
     private String lastClass = "object";
     private double playbackRate = 1;
 
@@ -238,6 +261,11 @@ public final class EditorWindow extends JFrame {
                 session.cancelTracking();
             }
         });
+        add("Zones", "Draw a zone (click its corners)", "Z", site::drawZone);
+        add("Zones", "Draw a counting line (drag from end to end)", "L", site::drawLine);
+        add("Zones", "Rename the selected zone or line…", "R", site::rename);
+        add("Zones", "Delete the selected zone or line", "shift DELETE", site::delete);
+        add("Zones", "Import zones and lines from a file…", "control I", site::chooseFile);
         add("Go", "Next frame", "RIGHT", () -> step(1));
         add("Go", "Previous frame", "LEFT", () -> step(-1));
         add("Go", "Ten frames on", "shift RIGHT", () -> step(10));
@@ -252,11 +280,12 @@ public final class EditorWindow extends JFrame {
         add("Go", "Play or pause", "P", this::togglePlay);
         add("Go", "Play faster", "CLOSE_BRACKET", () -> setRate(playbackRate * 2));
         add("Go", "Play slower", "OPEN_BRACKET", () -> setRate(playbackRate / 2));
+        add("View", "Show or hide zones and lines", "V", site::toggleShown);
         add("View", "Light or dark theme", "control T", this::toggleTheme);
         add("View", "Keys", "F1", this::showHelp);
 
         JMenuBar bar = new JMenuBar();
-        for (String menu : List.of("File", "Edit", "Go", "View")) {
+        for (String menu : List.of("File", "Edit", "Zones", "Go", "View")) {
             JMenu m = new JMenu(menu);
             m.setName("menu" + menu);
             for (Command c : commands) {
@@ -357,6 +386,31 @@ public final class EditorWindow extends JFrame {
             public void message(String text) {
                 status.setText(text);
             }
+
+            @Override
+            public void zoneDrawn(List<PixelPoint> corners) {
+                site.nameAndAdd(SiteItem.Kind.ZONE, corners);
+            }
+
+            @Override
+            public void lineDrawn(PixelPoint from, PixelPoint to) {
+                site.nameAndAdd(SiteItem.Kind.LINE, List.of(from, to));
+            }
+
+            @Override
+            public void siteSelected(SiteItem item) {
+                site.select(item);
+            }
+
+            @Override
+            public void zoneChanged(String name, List<PixelPoint> polygon) {
+                edit(p -> SiteEdits.reshapeZone(p, name, polygon));
+            }
+
+            @Override
+            public void lineChanged(String name, PixelPoint from, PixelPoint to) {
+                edit(p -> SiteEdits.moveLine(p, name, from, to));
+            }
         });
         timeline.addListener(new TimelineView.Listener() {
             @Override
@@ -373,6 +427,9 @@ public final class EditorWindow extends JFrame {
     }
 
     private void select(Integer id) {
+        if (id != null && site.selected() != null) {
+            site.select(null);
+        }
         selected = id;
         frameView.setSelectedTrack(id);
         timeline.setSelectedTrack(id);
@@ -382,6 +439,21 @@ public final class EditorWindow extends JFrame {
     /** Selects a track as a click on it would (for the screenshots). */
     void selectTrackForTest(int id) {
         select(id);
+    }
+
+    /** Selects a zone or line as a click on it would (for the screenshots). */
+    void selectSiteForTest(SiteItem item) {
+        site.select(item);
+    }
+
+    /** The zone or line selected, for tests. */
+    SiteItem selectedSiteForTest() {
+        return site.selected();
+    }
+
+    /** Imports a zones file as the Zones menu's command does, without the file chooser (for tests). */
+    void importZones(Path file) {
+        site.importFile(file);
     }
 
     private void selectAndShow(int id) {
@@ -524,6 +596,7 @@ public final class EditorWindow extends JFrame {
         if (selected != null && p.track(selected).isEmpty()) {
             select(null);
         }
+        site.projectShown(p);
         updateTitle();
         if (toDigest.getAndSet(new Pending(p, frameCount(), generation)) == null) {
             digester.submit(this::digestNewest);
@@ -807,6 +880,10 @@ public final class EditorWindow extends JFrame {
     }
 
     private void deleteKeyframe() {
+        if (selected == null && site.selected() != null) {
+            site.delete(); // Delete on a selected zone or line deletes it, as Shift+Delete does
+            return;
+        }
         Track t = selectedTrack();
         if (t != null) {
             edit(p -> Edits.deleteKeyframe(p, t.id(), frame));

@@ -35,6 +35,7 @@ import org.modetrail.model.Box;
 import org.modetrail.model.BoxSource;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.ObjectClass;
+import org.modetrail.model.PixelPoint;
 import org.modetrail.model.Presence;
 import org.modetrail.model.Project;
 import org.modetrail.model.Track;
@@ -53,7 +54,14 @@ import org.modetrail.model.Track;
  * empty space draws a box; a left click on a box selects its track (and a drag from there moves it), a click on
  * empty space clears the selection; a drag inside the selected box moves it, on a grip resizes it; a double click on
  * empty space fits the frame to the view. Keys (when the canvas has focus): F fits, Space held pans, Escape drops
- * the drag under way. Edited boxes are kept inside the frame ({@link BoxHandles}). Use on the event thread only.
+ * the drag under way. Edited boxes are kept inside the frame ({@link BoxHandles}).
+ *
+ * <p>The project's zones and counting lines are drawn under the boxes on every frame ({@link SitePainter}) unless
+ * hidden; their tools, selection and drags are {@link SiteLayer}'s. While a zone or line tool is on, left clicks
+ * belong to it, boxes included (Enter closes a zone, Backspace takes back a corner, Escape drops the drawing).
+ * Otherwise the selected zone's or line's corners and ends come first, then boxes, then the outlines of zones and
+ * lines (a click selects one, a drag moves it whole); a click, not a drag, inside a zone selects it. A track and a
+ * zone or line are never selected together. Use on the event thread only.
  */
 public class FrameView extends JComponent {
 
@@ -74,6 +82,26 @@ public class FrameView extends JComponent {
         /** Something to tell the user in the status line (a refused or adjusted box). */
         default void message(String text) {
         }
+
+        /** A zone was drawn with these corners (image coordinates, inside the frame, at least 3); it needs a name. */
+        default void zoneDrawn(List<PixelPoint> corners) {
+        }
+
+        /** A counting line was drawn from {@code from} to {@code to} (image coordinates, inside the frame). */
+        default void lineDrawn(PixelPoint from, PixelPoint to) {
+        }
+
+        /** The user clicked a zone or a counting line, or empty space ({@code null}). */
+        default void siteSelected(SiteItem item) {
+        }
+
+        /** The user moved zone {@code name}'s corners (one, or all of them); {@code polygon} is the new outline. */
+        default void zoneChanged(String name, List<PixelPoint> polygon) {
+        }
+
+        /** The user moved counting line {@code name}'s ends (one, or both). */
+        default void lineChanged(String name, PixelPoint from, PixelPoint to) {
+        }
     }
 
     /** Told when a drawn box is refused for its size. */
@@ -93,7 +121,7 @@ public class FrameView extends JComponent {
     private static final Listener SILENT = new Listener() {
     };
 
-    private enum Drag { NONE, PAN, DRAW, MOVE, RESIZE }
+    private enum Drag { NONE, PAN, DRAW, MOVE, RESIZE, SITE, SITE_TOOL }
 
     /** A track with what drawing it needs, worked out when the project is set. */
     private record Painted(Track track, Color colour, Color text, Color halo, Color wash, String label) {
@@ -102,6 +130,36 @@ public class FrameView extends JComponent {
     private final ViewTransform.Limits limits;
     private final BoxHandles handles;
     private Listener listener = SILENT;
+    private final SiteLayer site = new SiteLayer(new SiteLayer.Host() {
+        @Override
+        public ViewTransform transform() {
+            return transform;
+        }
+
+        @Override
+        public int frameWidth() {
+            return image == null ? 0 : image.getWidth();
+        }
+
+        @Override
+        public int frameHeight() {
+            return image == null ? 0 : image.getHeight();
+        }
+
+        @Override
+        public Listener listener() {
+            return listener;
+        }
+
+        @Override
+        public void repaintView(java.awt.Rectangle area) {
+            if (area == null) {
+                repaint();
+            } else {
+                repaint(area);
+            }
+        }
+    }, SiteHandles.defaults());
 
     private BufferedImage image;
     private int frame = -1;
@@ -224,14 +282,16 @@ public class FrameView extends JComponent {
         frame = frameIndex;
         image = frameImage;
         if (newSize) {
+            site.cancelTool(); // another video: a zone or line half drawn on the last one is dropped
             following = true;
             fitToView();
         }
         repaint();
     }
 
-    /** The tracks to draw (null for none). */
+    /** The tracks, zones and counting lines to draw (null for none). */
     public void setProject(Project p) {
+        site.setSite(p == null ? null : p.site());
         painted.clear();
         if (p != null) {
             for (Track t : p.tracks()) {
@@ -259,6 +319,57 @@ public class FrameView extends JComponent {
 
     public Integer selectedTrack() {
         return selected;
+    }
+
+    // ------------------------------------------------------------------------------ zones and counting lines
+
+    /** Starts the zone tool: clicks add corners until the zone is closed (see {@link SiteLayer}). */
+    public void startZoneTool() {
+        cancelDrag();
+        site.start(SiteLayer.Tool.ZONE);
+        listener.message(SiteLayer.ZONE_HINT);
+        updateCursor(lastX, lastY);
+    }
+
+    /** Starts the counting-line tool: a drag, or two clicks, gives the line's ends. */
+    public void startLineTool() {
+        cancelDrag();
+        site.start(SiteLayer.Tool.LINE);
+        listener.message(SiteLayer.LINE_HINT);
+        updateCursor(lastX, lastY);
+    }
+
+    /** Whether a zone or counting line is being drawn. */
+    public boolean drawsSite() {
+        return site.tool() != SiteLayer.Tool.NONE;
+    }
+
+    /** Shows or hides the zones and counting lines (hidden, they cannot be clicked either). */
+    public void setSiteVisible(boolean show) {
+        site.setVisible(show);
+    }
+
+    public boolean siteVisible() {
+        return site.visible();
+    }
+
+    /** The zone or counting line shown selected with its grips, or none. */
+    public void setSelectedSite(SiteItem item) {
+        site.setSelected(item);
+    }
+
+    public SiteItem selectedSite() {
+        return site.selected();
+    }
+
+    /** Forgets a zone or line drawn and handed over for a name the user then did not give. */
+    public void dropDrawnSite() {
+        site.dropPending();
+    }
+
+    /** The corners of the zone being drawn, for tests. */
+    List<PixelPoint> zoneDraft() {
+        return site.draftCorners();
     }
 
     /** The frame shown, -1 before the first. */
@@ -325,9 +436,15 @@ public class FrameView extends JComponent {
             updateCursor(lastX, lastY);
         });
         key(in, act, "ESCAPE", "drop-drag", () -> {
+            if (site.cancelTool()) {
+                listener.message("Drawing cancelled");
+            }
+            site.cancelDrag();
             cancelDrag();
             updateCursor(lastX, lastY);
         });
+        key(in, act, "ENTER", "close-zone", site::finishZone);
+        key(in, act, "BACK_SPACE", "take-back-corner", site::removeLast);
     }
 
     private static void key(InputMap in, ActionMap act, String stroke, String name, Runnable r) {
@@ -364,6 +481,15 @@ public class FrameView extends JComponent {
             if (!SwingUtilities.isLeftMouseButton(e)) {
                 return;
             }
+            if (site.tool() != SiteLayer.Tool.NONE) {
+                drag = Drag.SITE_TOOL;
+                site.pressTool(pressX, pressY, e.getClickCount());
+                return;
+            }
+            if (site.pressSelectedPoint(pressX, pressY)) {
+                drag = Drag.SITE;
+                return;
+            }
             FrameAnnotation sel = selected == null ? null : visibleAt(selected);
             Painted under = trackAt(pressX, pressY);
             if (sel != null) {
@@ -378,8 +504,17 @@ public class FrameView extends JComponent {
                 int id = under.track().id();
                 selected = id;
                 listener.trackSelected(id);
+                if (site.selected() != null) {
+                    site.setSelected(null);
+                    listener.siteSelected(null);
+                }
                 startEdit(id, under.track().frames().get(frame).box(), BoxHandles.Grip.INSIDE);
                 repaint();
+                return;
+            }
+            if (site.pressItem(pressX, pressY)) {
+                drag = Drag.SITE;
+                dropTrackSelection();
                 return;
             }
             if (e.getClickCount() >= 2) {
@@ -397,6 +532,8 @@ public class FrameView extends JComponent {
             }
             Box before = preview != null ? preview.box() : drag == Drag.DRAW ? null : dragStart;
             switch (drag) {
+                case SITE -> site.drag(x, y);
+                case SITE_TOOL -> site.moveTo(x, y);
                 case PAN -> {
                     transform = transform.panBy(x - lastX, y - lastY);
                     following = false;
@@ -427,6 +564,16 @@ public class FrameView extends JComponent {
             if (was == Drag.NONE || (!pan && !SwingUtilities.isLeftMouseButton(e))) {
                 return;
             }
+            if (was == Drag.SITE || was == Drag.SITE_TOOL) {
+                drag = Drag.NONE;
+                if (was == Drag.SITE) {
+                    site.release(e.getX(), e.getY());
+                } else {
+                    site.releaseTool(e.getX(), e.getY());
+                }
+                updateCursor(e.getX(), e.getY());
+                return;
+            }
             if (!pan && dragging) {
                 mouseDragged(e); // the release point counts, even without a last drag event there
             }
@@ -437,10 +584,8 @@ public class FrameView extends JComponent {
             cancelDrag();
             if (was == Drag.DRAW) {
                 if (!moved) {
-                    if (selected != null) {
-                        selected = null;
-                        listener.trackSelected(null);
-                    }
+                    site.click(pressX, pressY); // selects the zone there, or drops the selected zone or line
+                    dropTrackSelection();
                 } else if (result == null || !handles.bigEnough(result.box())) {
                     listener.message(TOO_SMALL);
                 } else {
@@ -464,13 +609,14 @@ public class FrameView extends JComponent {
         public void mouseMoved(MouseEvent e) {
             lastX = e.getX();
             lastY = e.getY();
+            site.moveTo(lastX, lastY);
             updateCursor(lastX, lastY);
         }
 
         @Override
         public void mouseWheelMoved(MouseWheelEvent e) {
             double notches = e.getPreciseWheelRotation();
-            if (notches != 0 && drag != Drag.DRAW && drag != Drag.MOVE && drag != Drag.RESIZE) {
+            if (notches != 0 && drag != Drag.DRAW && drag != Drag.MOVE && drag != Drag.RESIZE && drag != Drag.SITE) {
                 zoomBy(Math.pow(WHEEL_STEP, -notches), e.getX(), e.getY());
             }
         }
@@ -506,6 +652,13 @@ public class FrameView extends JComponent {
         repaint(area.getBounds());
     }
 
+    private void dropTrackSelection() {
+        if (selected != null) {
+            selected = null;
+            listener.trackSelected(null);
+        }
+    }
+
     private void startEdit(int trackId, Box box, BoxHandles.Grip g) {
         drag = g.resizes() ? Drag.RESIZE : Drag.MOVE;
         grip = g;
@@ -519,6 +672,7 @@ public class FrameView extends JComponent {
     }
 
     private void cancelDrag() {
+        site.cancelDrag();
         drag = Drag.NONE;
         dragging = false;
         preview = null;
@@ -566,12 +720,15 @@ public class FrameView extends JComponent {
         } else {
             FrameAnnotation sel = selected == null ? null : visibleAt(selected);
             BoxHandles.Grip g = sel == null ? BoxHandles.Grip.NONE : handles.hit(sel.box(), transform, x, y);
-            if (g != BoxHandles.Grip.NONE) {
+            int onSite = site.cursorAt(x, y);
+            if (onSite == Cursor.MOVE_CURSOR || onSite == Cursor.CROSSHAIR_CURSOR) {
+                type = onSite; // a grip of the selected zone or line, or a drawing tool
+            } else if (g != BoxHandles.Grip.NONE) {
                 type = cursorFor(g);
             } else if (trackAt(x, y) != null) {
                 type = Cursor.HAND_CURSOR;
             } else {
-                type = Cursor.CROSSHAIR_CURSOR;
+                type = onSite >= 0 ? onSite : Cursor.CROSSHAIR_CURSOR;
             }
         }
         if (getCursor().getType() != type) {
@@ -624,6 +781,8 @@ public class FrameView extends JComponent {
             g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             g2.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
+            // Zones and lines under the boxes: they are the same on every frame, so a stand-in shows them too.
+            site.paint(g2, tagFont, getWidth(), getHeight());
             if (showsStandIn()) {
                 paintStandInNote(g2);
                 return;

@@ -26,6 +26,14 @@ final class ShortcutHelp {
         {"Frame", "Pan", "Space+drag, middle drag"},
         {"Frame", "Fit the frame to the window", "F, double-click"},
         {"Frame", "Drop the drag under way", "Escape"},
+        {"Frame", "Select a zone or counting line", "Click its outline, or inside a zone"},
+        {"Frame", "Move a corner or end of the selected zone or line", "Drag it"},
+        {"Frame", "Move the whole zone or line", "Drag its outline"},
+        {"Zone tool", "Add a corner", "Click"},
+        {"Zone tool", "Close the zone", "Click the first corner, double-click, Enter"},
+        {"Zone tool", "Take back the last corner", "Backspace"},
+        {"Zone and line tools", "Cancel the drawing", "Escape"},
+        {"Line tool", "Draw the line", "Drag from end to end, or click both ends"},
         {"Timeline", "Go to a frame, select a track", "Click a lane"},
         {"Timeline", "Zoom, scroll", "Wheel, Shift+Wheel"}};
 

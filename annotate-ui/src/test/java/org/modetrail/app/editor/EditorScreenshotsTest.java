@@ -5,10 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.Color;
 import java.awt.GraphicsEnvironment;
+import java.awt.event.InputEvent;
+import java.awt.event.MouseEvent;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.List;
 import java.util.UUID;
 import java.util.prefs.Preferences;
 
@@ -22,6 +25,12 @@ import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.modetrail.app.Main;
+import org.modetrail.model.CountingLine;
+import org.modetrail.model.Edit;
+import org.modetrail.model.PixelPoint;
+import org.modetrail.model.Project;
+import org.modetrail.model.SiteEdits;
+import org.modetrail.model.Zone;
 
 /**
  * Screenshots of the editor's main screen and its key list, in the light and the dark theme, on the arena demo
@@ -72,6 +81,17 @@ class EditorScreenshotsTest {
             Color corner = new Color(main.getRGB(main.getWidth() - 3, main.getHeight() - 3));
             int lightness = (corner.getRed() + corner.getGreen() + corner.getBlue()) / 3;
             assertTrue(dark ? lightness < 128 : lightness > 128, theme + " theme, corner " + corner);
+            BufferedImage zones = zonesAndLines(w);
+            ImageIO.write(zones, "png", out.resolve("editor-zones-" + theme + ".png").toFile());
+            // The selected line's white bar shows at its middle, (300, 240) on the image, whatever the theme.
+            Color onLine = GuiActionRunner.execute(() -> {
+                FrameView v = (FrameView) find(w.getRootPane(), "frameView");
+                java.awt.Point at = SwingUtilities.convertPoint(v, (int) Math.round(v.transform().toViewX(300)),
+                        (int) Math.round(v.transform().toViewY(200)), w.getRootPane());
+                return new Color(zones.getRGB(at.x, at.y));
+            });
+            assertTrue(onLine.getRed() > 230 && onLine.getGreen() > 230 && onLine.getBlue() > 230,
+                    "the counting line is drawn white, got " + onLine);
             JDialog keys = GuiActionRunner.execute(() -> ShortcutHelp.show(w, w.commands()));
             Thread.sleep(500);
             BufferedImage help = GuiActionRunner.execute(() -> paint(keys.getRootPane()));
@@ -91,6 +111,64 @@ class EditorScreenshotsTest {
             });
             node.removeNode();
         }
+    }
+
+    /**
+     * Two zones and two counting lines over the arena (one zone reaching onto the dark floor outside it, one line
+     * crossing the rim), the line "gate" selected, and a third zone half drawn with the pointer beside it.
+     */
+    private static BufferedImage zonesAndLines(EditorWindow w) throws InterruptedException {
+        GuiActionRunner.execute(() -> {
+            Project p = w.session().project();
+            p = SiteEdits.addZone(p, new Zone("nest", List.of(pt(80, 60), pt(230, 40), pt(260, 170), pt(120, 200))))
+                    .project();
+            p = SiteEdits.addZone(p, new Zone("feeder", List.of(pt(400, 330), pt(560, 300), pt(590, 420),
+                    pt(430, 450)))).project();
+            p = SiteEdits.addLine(p, new CountingLine("gate", pt(300, 100), pt(300, 380))).project();
+            p = SiteEdits.addLine(p, new CountingLine("exit", pt(480, 60), pt(620, 200))).project();
+            w.session().apply(new Edit(p, 0, 0, 0, false));
+        });
+        Thread.sleep(300);
+        GuiActionRunner.execute(() -> {
+            w.selectSiteForTest(SiteItem.line("gate"));
+            FrameView v = (FrameView) find(w.getRootPane(), "frameView");
+            v.startZoneTool();
+            ViewTransform t = v.transform();
+            double[][] corners = {{60, 300}, {200, 330}, {180, 440}};
+            for (double[] c : corners) {
+                int x = (int) Math.round(t.toViewX(c[0])), y = (int) Math.round(t.toViewY(c[1]));
+                for (int id : new int[] {MouseEvent.MOUSE_PRESSED, MouseEvent.MOUSE_RELEASED}) {
+                    v.dispatchEvent(new MouseEvent(v, id, System.currentTimeMillis(),
+                            id == MouseEvent.MOUSE_PRESSED ? InputEvent.BUTTON1_DOWN_MASK : 0, x, y, 1, false,
+                            MouseEvent.BUTTON1));
+                }
+            }
+            v.dispatchEvent(new MouseEvent(v, MouseEvent.MOUSE_MOVED, System.currentTimeMillis(), 0,
+                    (int) Math.round(t.toViewX(70)), (int) Math.round(t.toViewY(430)), 0, false, MouseEvent.NOBUTTON));
+            // The selection is dropped by the tool: select the line again, so both show in one picture.
+            v.setSelectedSite(SiteItem.line("gate"));
+        });
+        Thread.sleep(500);
+        return GuiActionRunner.execute(() -> paint(w.getRootPane()));
+    }
+
+    private static PixelPoint pt(double x, double y) {
+        return new PixelPoint(x, y);
+    }
+
+    private static java.awt.Component find(java.awt.Container c, String name) {
+        for (java.awt.Component k : c.getComponents()) {
+            if (name.equals(k.getName())) {
+                return k;
+            }
+            if (k instanceof java.awt.Container inner) {
+                java.awt.Component found = find(inner, name);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
     }
 
     private static BufferedImage paint(JComponent c) {
