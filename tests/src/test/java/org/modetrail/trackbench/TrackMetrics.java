@@ -2,6 +2,7 @@ package org.modetrail.trackbench;
 
 import java.util.List;
 
+import org.modetrail.evaluation.SingleObjectEvaluation;
 import org.modetrail.model.Box;
 
 /**
@@ -64,21 +65,6 @@ public final class TrackMetrics {
 
     /** Mean over the 21 thresholds of the fraction of {@code ious[0..count)} strictly above the threshold. */
     public static double successAuc(double[] ious, int count) {
-        if (count == 0) {
-            return 0;
-        }
-        double sum = 0;
-        for (int i = 0; i < SUCCESS_THRESHOLDS; i++) {
-            // i / 20.0 rather than i * 0.05, so thresholds 0.5 and 1 are exact and an IoU of exactly 0.5 is not above 0.5.
-            double threshold = i / 20.0;
-            int above = 0;
-            for (int k = 0; k < count; k++) {
-                if (ious[k] > threshold) {
-                    above++;
-                }
-            }
-            sum += (double) above / count;
-        }
-        return sum / SUCCESS_THRESHOLDS;
+        return count == 0 ? 0 : SingleObjectEvaluation.successAuc(ious, count);
     }
 }

@@ -39,6 +39,24 @@ public final class SingleObjectEvaluation {
         return out;
     }
 
+    /** Mean over the 21 thresholds t = i / 20 of the fraction of {@code ious[0..count)} strictly above t. */
+    public static double successAuc(double[] ious, int count) {
+        if (count == 0) {
+            return Double.NaN;
+        }
+        double sum = 0;
+        for (int i = 0; i < SUCCESS_POINTS; i++) {
+            int above = 0;
+            for (int k = 0; k < count; k++) {
+                if (ious[k] > i / 20.0) {
+                    above++;
+                }
+            }
+            sum += (double) above / count;
+        }
+        return sum / SUCCESS_POINTS;
+    }
+
     static SingleObjectScore score(int id, NavigableMap<Integer, LabelledBox> truth,
                                    NavigableMap<Integer, LabelledBox> track) {
         List<double[]> scored = new ArrayList<>(); // {iou, centre error}
