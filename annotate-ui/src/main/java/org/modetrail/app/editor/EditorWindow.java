@@ -474,11 +474,7 @@ public final class EditorWindow extends JFrame {
                 SwingUtilities.invokeLater(() -> status.setText(message));
             }
         });
-        double[] times = new double[fetcher.video().frameCount()];
-        for (int i = 0; i < times.length; i++) {
-            times[i] = fetcher.video().index().timeSeconds(i);
-        }
-        timeline.setFrameTimes(times);
+        timeline.setFrameTimes(fetcher.video().index().timesSeconds());
         projectShown(s.project());
         frame = 0;
         showFrame(0);
