@@ -61,6 +61,8 @@ import org.modetrail.summary.MeasurementCaution;
 final class ExportDialog extends JDialog {
     private static final String[] PLOT_FORMATS = {"PNG", "SVG", "PNG and SVG"};
     private static final String[] PLOT_COLOURS = {"by class", "by track"};
+    /** Where a row's files and state wrap, in CSS pixels (Swing's HTML draws them a third wider on screen). */
+    private static final int WRAP_WIDTH = 440;
 
     private final EditorPreferences prefs;
     private final Supplier<Project> project;
@@ -94,6 +96,8 @@ final class ExportDialog extends JDialog {
         final JLabel files = new JLabel(" ");
         final JProgressBar bar = new JProgressBar(0, 1000);
         final JButton cancel = new JButton("Cancel");
+        /** The bar and Cancel, or nothing in the same room. */
+        final JPanel progress = new JPanel(new java.awt.CardLayout());
         ExportJobState state;
 
         Row(ExportItem item) {
@@ -105,8 +109,8 @@ final class ExportDialog extends JDialog {
             bar.setName("exportBar." + item.name());
             bar.setStringPainted(true);
             bar.setString("");
-            bar.setPreferredSize(new Dimension(230, bar.getPreferredSize().height));
-            bar.setVisible(false);
+            bar.setPreferredSize(new Dimension(com.formdev.flatlaf.util.UIScale.scale(230),
+                    cancel.getPreferredSize().height));
             cancel.setName("exportCancel." + item.name());
             cancel.setEnabled(false);
             cancel.addActionListener(e -> {
@@ -116,6 +120,16 @@ final class ExportDialog extends JDialog {
                     bar.setString("cancelling…");
                 }
             });
+            JPanel shown = new JPanel(new BorderLayout(6, 0));
+            shown.add(bar, BorderLayout.CENTER);
+            shown.add(cancel, BorderLayout.EAST);
+            progress.add(new JPanel(), "idle");
+            progress.setMinimumSize(shown.getPreferredSize());
+            progress.add(shown, "shown");
+        }
+
+        void showProgress(boolean on) {
+            ((java.awt.CardLayout) progress.getLayout()).show(progress, on ? "shown" : "idle");
         }
     }
 
@@ -147,6 +161,11 @@ final class ExportDialog extends JDialog {
             @Override
             public void windowActivated(WindowEvent e) {
                 refresh();
+            }
+
+            @Override
+            public void windowOpened(WindowEvent e) {
+                exportButton.requestFocusInWindow();
             }
         });
         getRootPane().registerKeyboardAction(e -> setVisible(false), KeyStroke.getKeyStroke("ESCAPE"),
@@ -192,6 +211,7 @@ final class ExportDialog extends JDialog {
         JLabel folderLabel = new JLabel("Folder:");
         folder.add(folderLabel, BorderLayout.WEST);
         folderField.setName("exportFolder");
+        folderField.putClientProperty("JTextField.selectAllOnFocusPolicy", "never");
         folderField.getDocument().addDocumentListener(new DocumentListener() {
             @Override
             public void insertUpdate(DocumentEvent e) {
@@ -216,34 +236,40 @@ final class ExportDialog extends JDialog {
                 + "replaced only when you agree."), BorderLayout.SOUTH);
         content.add(folder, BorderLayout.NORTH);
 
+        // Two lines an item: its check box and options; under them its files (or its state) with, while it waits
+        // or runs, the progress bar and Cancel (whose room is kept, so the screen does not jump).
         JPanel jobs = new JPanel(new GridBagLayout());
         int y = 0;
         for (ExportItem item : ExportItem.values()) {
             Row r = rows.get(item);
             GridBagConstraints c = new GridBagConstraints();
             c.gridy = y;
-            c.anchor = GridBagConstraints.WEST;
-            c.insets = new Insets(y == 0 ? 0 : 10, 0, 0, 8);
             c.gridx = 0;
+            c.anchor = GridBagConstraints.WEST;
+            c.insets = new Insets(y == 0 ? 0 : 8, 0, 0, 8);
             jobs.add(r.choose, c);
             c.gridx = 1;
+            c.gridwidth = 2;
             c.weightx = 1;
             c.fill = GridBagConstraints.HORIZONTAL;
-            jobs.add(options(item), c);
-            c.weightx = 0;
-            c.fill = GridBagConstraints.NONE;
-            c.gridx = 2;
-            jobs.add(r.bar, c);
-            c.gridx = 3;
             c.insets.right = 0;
-            jobs.add(r.cancel, c);
+            jobs.add(options(item), c);
             GridBagConstraints f = new GridBagConstraints();
             f.gridy = y + 1;
             f.gridx = 0;
-            f.gridwidth = 4;
-            f.anchor = GridBagConstraints.WEST;
-            f.insets = new Insets(2, 28, 0, 0);
+            f.gridwidth = 2;
+            f.weightx = 1;
+            f.fill = GridBagConstraints.HORIZONTAL;
+            f.anchor = GridBagConstraints.NORTHWEST;
+            f.insets = new Insets(2, 28, 0, 8);
             jobs.add(r.files, f);
+            f.gridx = 2;
+            f.gridwidth = 1;
+            f.weightx = 0;
+            f.fill = GridBagConstraints.NONE;
+            f.anchor = GridBagConstraints.NORTHEAST;
+            f.insets = new Insets(2, 0, 0, 0);
+            jobs.add(r.progress, f);
             y += 2;
         }
         jobs.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createTitledBorder("What to write"),
@@ -259,6 +285,7 @@ final class ExportDialog extends JDialog {
         caution.setOpaque(false);
         caution.setFont(UIManager.getFont("Label.font"));
         caution.setRows(3);
+        caution.setColumns(60);
         caution.setBorder(BorderFactory.createCompoundBorder(
                 BorderFactory.createMatteBorder(0, 3, 0, 0, new Color(0xE69F00)),
                 BorderFactory.createEmptyBorder(2, 8, 2, 4)));
@@ -309,7 +336,11 @@ final class ExportDialog extends JDialog {
                 p.add(plotColour);
                 p.add(new JLabel(" paths on the image,"));
                 p.add(groundPlots);
-                p.add(groundReason);
+                JPanel both = new JPanel(new BorderLayout(0, 2));
+                both.add(p, BorderLayout.NORTH);
+                groundReason.setBorder(BorderFactory.createEmptyBorder(0, 6, 0, 0));
+                both.add(groundReason, BorderLayout.SOUTH);
+                return both;
             }
             case OVERLAY -> {
                 overlayFrom.setName("overlayFrom");
@@ -386,7 +417,8 @@ final class ExportDialog extends JDialog {
             groundWasAvailable = calibrated;
         }
         groundPlots.setEnabled(calibrated && rows.get(ExportItem.PLOTS).choose.isSelected());
-        groundReason.setText(ExportPlan.whyNoGroundPlots(p).map(s -> "(" + s + ")").orElse(""));
+        groundReason.setText(ExportPlan.whyNoGroundPlots(p).map(ExportDialog::sentence).orElse(""));
+        groundReason.setVisible(!calibrated);
         groundPlots.setToolTipText(ExportPlan.whyNoGroundPlots(p).orElse(null));
         csvNote.setText(calibrated ? "boxes, with ground positions, speeds and their uncertainties"
                 : "boxes in pixels, sources and similarity scores");
@@ -417,11 +449,14 @@ final class ExportDialog extends JDialog {
                 showPlanned(r, plan, existing);
             }
         }
+        if (isShowing()) {
+            growToFit();
+        }
     }
 
     private void showPlanned(Row r, ExportPlan plan, List<Path> existing) {
         r.state = null;
-        r.bar.setVisible(false);
+        r.showProgress(false);
         r.cancel.setEnabled(false);
         List<String> names = new ArrayList<>();
         boolean exists = false;
@@ -435,8 +470,8 @@ final class ExportDialog extends JDialog {
         }
         boolean chosen = r.choose.isSelected();
         r.files.setForeground(UIManager.getColor(chosen ? "Label.foreground" : "Label.disabledForeground"));
-        r.files.setText((chosen ? "will write " : "would write ") + String.join(", ", names)
-                + (chosen && exists ? "  — exists; you will be asked before it is replaced" : ""));
+        r.files.setText(wrapped("", (chosen ? "will write " : "would write ") + String.join(", ", names)
+                + (chosen && exists ? "  — exists; you will be asked before it is replaced" : "")));
         r.files.setToolTipText(plan.folder().toString());
     }
 
@@ -503,7 +538,17 @@ final class ExportDialog extends JDialog {
                 r.state = null;
             }
         }
-        batch = runner.start(p, plan, (item, state) -> SwingUtilities.invokeLater(() -> show(item, state)));
+        batch = runner.start(p, plan, new ExportRunner.Listener() {
+            @Override
+            public void changed(ExportItem item, ExportJobState state) {
+                SwingUtilities.invokeLater(() -> show(item, state));
+            }
+
+            @Override
+            public void batchFinished() {
+                SwingUtilities.invokeLater(() -> finished());
+            }
+        });
         exportButton.setEnabled(false);
     }
 
@@ -513,8 +558,9 @@ final class ExportDialog extends JDialog {
             return; // a late progress report after the end
         }
         r.state = s;
-        r.bar.setVisible(true);
+        r.showProgress(true);
         r.cancel.setEnabled(!s.finished());
+        r.cancel.setVisible(!s.finished());
         r.bar.setIndeterminate(s.stage() == ExportJobState.Stage.RUNNING && s.total() == 0);
         r.bar.setValue(s.finished() ? (s.stage() == ExportJobState.Stage.DONE ? 1000 : 0)
                 : s.total() == 0 ? 0 : (int) (1000L * s.done() / s.total()));
@@ -522,29 +568,45 @@ final class ExportDialog extends JDialog {
         r.files.setForeground(UIManager.getColor("Label.foreground"));
         r.files.setToolTipText(null);
         switch (s.stage()) {
-            case WAITING -> r.files.setText("waiting for the jobs before it");
-            case RUNNING -> r.files.setText("writing " + plannedNames(item) + "…");
+            case WAITING -> r.files.setText(wrapped("", "waiting for the jobs before it"));
+            case RUNNING -> r.files.setText(wrapped("", "writing " + plannedNames(item) + "…"));
             case DONE -> {
-                r.files.setText("<html>Done: " + escape(String.join(", ", s.files().stream()
-                        .map(f -> f.getFileName().toString()).toList())) + " in " + escape(s.files().get(0)
-                        .getParent().toString()) + (s.message().isEmpty() ? "" : " — " + escape(s.message()))
-                        + "</html>");
+                r.files.setText(wrapped("Done:", String.join(", ", s.files().stream()
+                        .map(f -> f.getFileName().toString()).toList()) + " in " + s.files().get(0).getParent()
+                        + (s.message().isEmpty() ? "" : " — " + s.message())));
                 r.files.setToolTipText(s.files().get(0).toString());
             }
             case FAILED -> {
                 r.files.setForeground(errorColour());
-                r.files.setText("<html><body style='width:760px'><b>Failed:</b> " + escape(s.message())
-                        + "</body></html>");
+                r.files.setText(wrapped("Failed:", s.message()));
             }
-            case CANCELLED -> r.files.setText("Cancelled: " + s.message());
+            case CANCELLED -> r.files.setText(wrapped("Cancelled:", s.message()));
             default -> throw new IllegalStateException();
         }
-        if (batch != null && batch.isFinished() && allFinished()) {
-            exportButton.setEnabled(true);
-            status.accept(summaryLine());
-            refresh();
+        growToFit();
+    }
+
+    /** The batch is over: Export again, and the editor's status line says how it went. */
+    private void finished() {
+        status.accept(summaryLine());
+        refresh();
+    }
+
+    /**
+     * Grows the screen when its content needs more room (a longer note, a state that wraps onto another line, the
+     * caution shown); it never shrinks under the user. Twice at most, since wrapped text is as high as it is wide.
+     */
+    private void growToFit() {
+        for (int i = 0; i < 2; i++) {
+            getContentPane().invalidate();
+            validate();
+            Dimension wanted = getPreferredSize();
+            if (wanted.width <= getWidth() && wanted.height <= getHeight()) {
+                return;
+            }
+            setSize(Math.max(getWidth(), wanted.width), Math.max(getHeight(), wanted.height));
+            validate();
         }
-        pack();
     }
 
     private String plannedNames(ExportItem item) {
@@ -553,10 +615,6 @@ final class ExportDialog extends JDialog {
         } catch (IllegalArgumentException e) {
             return item.label();
         }
-    }
-
-    private boolean allFinished() {
-        return rows.values().stream().allMatch(r -> r.state == null || r.state.finished());
     }
 
     private String summaryLine() {
@@ -577,6 +635,13 @@ final class ExportDialog extends JDialog {
 
     private static Color errorColour() {
         return FlatLaf.isLafDark() ? new Color(0xFF8A80) : new Color(0xB00020);
+    }
+
+    /** Text for a row's second line, wrapped at a fixed width so the screen does not widen with long paths. */
+    private static String wrapped(String boldPrefix, String text) {
+        int width = com.formdev.flatlaf.util.UIScale.scale(WRAP_WIDTH);
+        return "<html><body style='width:" + width + "px'>" + (boldPrefix.isEmpty() ? "" : "<b>" + escape(boldPrefix)
+                + "</b> ") + escape(text) + "</body></html>";
     }
 
     private static String escape(String s) {

@@ -36,6 +36,10 @@ final class ExportRunner implements AutoCloseable {
     @FunctionalInterface
     interface Listener {
         void changed(ExportItem item, ExportJobState state);
+
+        /** Every job of the batch has finished (after its last {@link #changed}). */
+        default void batchFinished() {
+        }
     }
 
     private final Path videoFile;
@@ -96,6 +100,7 @@ final class ExportRunner implements AutoCloseable {
                 }
             } finally {
                 batch.finished = true;
+                listener.batchFinished();
             }
         });
         return batch;
