@@ -12,7 +12,6 @@ import java.awt.event.WindowEvent;
 import java.nio.file.Files;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.EnumSet;
 import java.util.List;
@@ -31,7 +30,6 @@ import javax.swing.JFileChooser;
 import javax.swing.JLabel;
 import javax.swing.JOptionPane;
 import javax.swing.JPanel;
-import javax.swing.JProgressBar;
 import javax.swing.JSpinner;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
@@ -42,8 +40,6 @@ import javax.swing.UIManager;
 import javax.swing.WindowConstants;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
-
-import com.formdev.flatlaf.FlatLaf;
 
 import org.modetrail.model.Project;
 import org.modetrail.picture.ColourBy;
@@ -61,8 +57,6 @@ import org.modetrail.summary.MeasurementCaution;
 final class ExportDialog extends JDialog {
     private static final String[] PLOT_FORMATS = {"PNG", "SVG", "PNG and SVG"};
     private static final String[] PLOT_COLOURS = {"by class", "by track"};
-    /** Where a row's files and state wrap, in CSS pixels (Swing's HTML draws them a third wider on screen). */
-    private static final int WRAP_WIDTH = 440;
 
     private final EditorPreferences prefs;
     private final Supplier<Project> project;
@@ -71,7 +65,7 @@ final class ExportDialog extends JDialog {
     private final Consumer<String> status;
     private final String baseName;
     private final JTextField folderField = new JTextField(40);
-    private final Map<ExportItem, Row> rows = new EnumMap<>(ExportItem.class);
+    private final Map<ExportItem, ExportRow> rows = new EnumMap<>(ExportItem.class);
     private final JLabel csvNote = muted("");
     private final JCheckBox cocoFrames = new JCheckBox();
     private final JComboBox<String> plotFormat = new JComboBox<>(PLOT_FORMATS);
@@ -88,50 +82,6 @@ final class ExportDialog extends JDialog {
     private final JButton exportButton = new JButton("Export");
     private ExportRunner.Batch batch;
     private boolean groundWasAvailable;
-
-    /** One item's row: its check box, the files it writes or its state, the progress bar and Cancel. */
-    private final class Row {
-        final ExportItem item;
-        final JCheckBox choose;
-        final JLabel files = new JLabel(" ");
-        final JProgressBar bar = new JProgressBar(0, 1000);
-        final JButton cancel = new JButton("Cancel");
-        /** The bar and Cancel, or nothing in the same room. */
-        final JPanel progress = new JPanel(new java.awt.CardLayout());
-        ExportJobState state;
-
-        Row(ExportItem item) {
-            this.item = item;
-            choose = new JCheckBox(item.label());
-            choose.setName("export." + item.name());
-            choose.addActionListener(e -> refresh());
-            files.setName("exportFiles." + item.name());
-            bar.setName("exportBar." + item.name());
-            bar.setStringPainted(true);
-            bar.setString("");
-            bar.setPreferredSize(new Dimension(com.formdev.flatlaf.util.UIScale.scale(230),
-                    cancel.getPreferredSize().height));
-            cancel.setName("exportCancel." + item.name());
-            cancel.setEnabled(false);
-            cancel.addActionListener(e -> {
-                if (batch != null) {
-                    batch.cancel(item);
-                    cancel.setEnabled(false);
-                    bar.setString("cancelling…");
-                }
-            });
-            JPanel shown = new JPanel(new BorderLayout(6, 0));
-            shown.add(bar, BorderLayout.CENTER);
-            shown.add(cancel, BorderLayout.EAST);
-            progress.add(new JPanel(), "idle");
-            progress.setMinimumSize(shown.getPreferredSize());
-            progress.add(shown, "shown");
-        }
-
-        void showProgress(boolean on) {
-            ((java.awt.CardLayout) progress.getLayout()).show(progress, on ? "shown" : "idle");
-        }
-    }
 
     private ExportDialog(java.awt.Window owner, EditorPreferences prefs, Supplier<Project> project, Path projectFile,
                          Path videoFile, Consumer<String> status) {
@@ -150,7 +100,11 @@ final class ExportDialog extends JDialog {
         Path remembered = prefs.exportFolder(projectFile);
         folderField.setText((remembered != null ? remembered : projectFile.toAbsolutePath().getParent()).toString());
         for (ExportItem item : ExportItem.values()) {
-            rows.put(item, new Row(item));
+            rows.put(item, new ExportRow(item, this::refresh, () -> {
+                if (batch != null) {
+                    batch.cancel(item);
+                }
+            }));
         }
         rows.get(ExportItem.CSV).choose.setSelected(true);
         groundWasAvailable = ExportPlan.groundPlotsAvailable(p);
@@ -241,7 +195,7 @@ final class ExportDialog extends JDialog {
         JPanel jobs = new JPanel(new GridBagLayout());
         int y = 0;
         for (ExportItem item : ExportItem.values()) {
-            Row r = rows.get(item);
+            ExportRow r = rows.get(item);
             GridBagConstraints c = new GridBagConstraints();
             c.gridy = y;
             c.gridx = 0;
@@ -405,7 +359,7 @@ final class ExportDialog extends JDialog {
 
     /** The state of an item's last job, or null before its first. */
     ExportJobState state(ExportItem item) {
-        return rows.get(item).state;
+        return rows.get(item).state();
     }
 
     /** Shows what the settings would write, which options the project allows and whether the caution applies. */
@@ -444,35 +398,14 @@ final class ExportDialog extends JDialog {
         caution.setVisible(plan.carriesSpeeds(p));
         pixelsOnly.setVisible(!calibrated);
         List<Path> existing = plan.existing();
-        for (Row r : rows.values()) {
-            if (r.state == null || !r.choose.isSelected() && r.state.finished()) {
-                showPlanned(r, plan, existing);
+        for (ExportRow r : rows.values()) {
+            if (r.state() == null || !r.choose.isSelected() && r.state().finished()) {
+                r.showPlanned(plan, existing);
             }
         }
         if (isShowing()) {
             growToFit();
         }
-    }
-
-    private void showPlanned(Row r, ExportPlan plan, List<Path> existing) {
-        r.state = null;
-        r.showProgress(false);
-        r.cancel.setEnabled(false);
-        List<String> names = new ArrayList<>();
-        boolean exists = false;
-        for (Path f : plan.files(r.item)) {
-            names.add(f.getFileName().toString());
-            exists |= existing.contains(f);
-        }
-        if (r.item == ExportItem.COCO && plan.cocoFrames()) {
-            names.add(plan.framesFolder().orElseThrow().getFileName() + "/frame_NNNNNN.png");
-            exists |= existing.contains(plan.framesFolder().orElseThrow());
-        }
-        boolean chosen = r.choose.isSelected();
-        r.files.setForeground(UIManager.getColor(chosen ? "Label.foreground" : "Label.disabledForeground"));
-        r.files.setText(wrapped("", (chosen ? "will write " : "would write ") + String.join(", ", names)
-                + (chosen && exists ? "  — exists; you will be asked before it is replaced" : "")));
-        r.files.setToolTipText(plan.folder().toString());
     }
 
     private static String sentence(String s) {
@@ -533,9 +466,9 @@ final class ExportDialog extends JDialog {
         }
         prefs.setExportFolder(projectFile, plan.folder());
         problem.setText(" ");
-        for (Row r : rows.values()) {
+        for (ExportRow r : rows.values()) {
             if (plan.items().contains(r.item)) {
-                r.state = null;
+                r.clear();
             }
         }
         batch = runner.start(p, plan, new ExportRunner.Listener() {
@@ -553,36 +486,7 @@ final class ExportDialog extends JDialog {
     }
 
     private void show(ExportItem item, ExportJobState s) {
-        Row r = rows.get(item);
-        if (r.state != null && r.state.finished() && !s.finished()) {
-            return; // a late progress report after the end
-        }
-        r.state = s;
-        r.showProgress(true);
-        r.cancel.setEnabled(!s.finished());
-        r.cancel.setVisible(!s.finished());
-        r.bar.setIndeterminate(s.stage() == ExportJobState.Stage.RUNNING && s.total() == 0);
-        r.bar.setValue(s.finished() ? (s.stage() == ExportJobState.Stage.DONE ? 1000 : 0)
-                : s.total() == 0 ? 0 : (int) (1000L * s.done() / s.total()));
-        r.bar.setString(s.shortText());
-        r.files.setForeground(UIManager.getColor("Label.foreground"));
-        r.files.setToolTipText(null);
-        switch (s.stage()) {
-            case WAITING -> r.files.setText(wrapped("", "waiting for the jobs before it"));
-            case RUNNING -> r.files.setText(wrapped("", "writing " + plannedNames(item) + "…"));
-            case DONE -> {
-                r.files.setText(wrapped("Done:", String.join(", ", s.files().stream()
-                        .map(f -> f.getFileName().toString()).toList()) + " in " + s.files().get(0).getParent()
-                        + (s.message().isEmpty() ? "" : " — " + s.message())));
-                r.files.setToolTipText(s.files().get(0).toString());
-            }
-            case FAILED -> {
-                r.files.setForeground(errorColour());
-                r.files.setText(wrapped("Failed:", s.message()));
-            }
-            case CANCELLED -> r.files.setText(wrapped("Cancelled:", s.message()));
-            default -> throw new IllegalStateException();
-        }
+        rows.get(item).show(s, plannedNames(item));
         growToFit();
     }
 
@@ -619,9 +523,9 @@ final class ExportDialog extends JDialog {
 
     private String summaryLine() {
         int done = 0, failed = 0, cancelled = 0;
-        for (Row r : rows.values()) {
-            if (r.state != null) {
-                switch (r.state.stage()) {
+        for (ExportRow r : rows.values()) {
+            if (r.state() != null) {
+                switch (r.state().stage()) {
                     case DONE -> done++;
                     case FAILED -> failed++;
                     case CANCELLED -> cancelled++;
@@ -631,20 +535,5 @@ final class ExportDialog extends JDialog {
         }
         return "Export: " + done + " done" + (failed > 0 ? ", " + failed + " failed (see the export screen, Ctrl+E)"
                 : "") + (cancelled > 0 ? ", " + cancelled + " cancelled" : "");
-    }
-
-    private static Color errorColour() {
-        return FlatLaf.isLafDark() ? new Color(0xFF8A80) : new Color(0xB00020);
-    }
-
-    /** Text for a row's second line, wrapped at a fixed width so the screen does not widen with long paths. */
-    private static String wrapped(String boldPrefix, String text) {
-        int width = com.formdev.flatlaf.util.UIScale.scale(WRAP_WIDTH);
-        return "<html><body style='width:" + width + "px'>" + (boldPrefix.isEmpty() ? "" : "<b>" + escape(boldPrefix)
-                + "</b> ") + escape(text) + "</body></html>";
-    }
-
-    private static String escape(String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 }
