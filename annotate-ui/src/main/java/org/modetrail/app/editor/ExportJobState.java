@@ -31,13 +31,21 @@ record ExportJobState(Stage stage, int done, int total, double secondsLeft, Stri
         return new ExportJobState(Stage.RUNNING, 0, 0, -1, "", List.of());
     }
 
+    /** Running with {@code done} of {@code total} steps and about {@code secondsLeft} to go (negative: unknown). */
+    static ExportJobState running(int done, int total, double secondsLeft) {
+        return new ExportJobState(Stage.RUNNING, done, total, secondsLeft, "", List.of());
+    }
+
     /**
-     * Running with {@code done} of {@code total} steps after {@code elapsedSeconds}; the time left assumes the
-     * rate so far goes on.
+     * The time left if the rate since the first report goes on (the encoder's and decoder's start-up is not a
+     * rate); unknown (negative) until 5 steps and half a second have passed since it.
+     *
+     * @param stepsSince   steps done since the first report
+     * @param secondsSince seconds since the first report
+     * @param stepsLeft    steps still to do
      */
-    static ExportJobState running(int done, int total, double elapsedSeconds) {
-        double left = done > 0 && elapsedSeconds > 0 ? elapsedSeconds * (total - done) / done : -1;
-        return new ExportJobState(Stage.RUNNING, done, total, left, "", List.of());
+    static double secondsLeft(int stepsSince, double secondsSince, int stepsLeft) {
+        return stepsSince >= 5 && secondsSince >= 0.5 ? secondsSince * stepsLeft / stepsSince : -1;
     }
 
     static ExportJobState doneWith(List<Path> files, String message) {

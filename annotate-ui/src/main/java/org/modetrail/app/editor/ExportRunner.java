@@ -175,7 +175,8 @@ final class ExportRunner implements AutoCloseable {
         private static final long EVERY_NANOS = 100_000_000L;
         private final ExportItem item;
         private final Listener listener;
-        private final long start = System.nanoTime();
+        private long first;
+        private int firstDone = -1;
         private long last = Long.MIN_VALUE;
 
         Ticker(ExportItem item, Listener listener) {
@@ -185,9 +186,14 @@ final class ExportRunner implements AutoCloseable {
 
         void report(int done, int total) {
             long now = System.nanoTime();
+            if (firstDone < 0) {
+                first = now;
+                firstDone = done;
+            }
             if (done == total || last == Long.MIN_VALUE || now - last >= EVERY_NANOS) {
                 last = now;
-                listener.changed(item, ExportJobState.running(done, total, (now - start) / 1e9));
+                listener.changed(item, ExportJobState.running(done, total,
+                        ExportJobState.secondsLeft(done - firstDone, (now - first) / 1e9, total - done)));
             }
         }
     }

@@ -237,6 +237,18 @@ class ExportDialogSwingTest {
         robot.click(find(d, "exportStart"));
         waitFor(() -> GuiActionRunner.execute(() -> d.state(ExportItem.OVERLAY) != null
                 && d.state(ExportItem.OVERLAY).done() > 0), "the overlay to run");
+        // A picture of the screen mid-run, for people to look at (beside EditorScreenshotsTest's).
+        Path shots = Files.createDirectories(Path.of(System.getProperty("modetrail.screenshotDir",
+                "target/screenshots")));
+        BufferedImage running = GuiActionRunner.execute(() -> {
+            BufferedImage img = new BufferedImage(d.getRootPane().getWidth(), d.getRootPane().getHeight(),
+                    BufferedImage.TYPE_INT_RGB);
+            java.awt.Graphics2D g = img.createGraphics();
+            d.getRootPane().paint(g);
+            g.dispose();
+            return img;
+        });
+        ImageIO.write(running, "png", shots.resolve("editor-export-running-light.png").toFile());
         robot.click(find(window, "status"));
         robot.pressAndReleaseKey(KeyEvent.VK_RIGHT);
         waitFor(() -> GuiActionRunner.execute(() -> window.currentFrame() == 1), "the editor to step meanwhile");

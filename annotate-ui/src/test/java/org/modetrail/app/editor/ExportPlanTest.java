@@ -114,12 +114,13 @@ class ExportPlanTest {
     }
 
     @Test
-    void progressGivesTheTimeLeftAtTheRateSoFar() {
-        ExportJobState s = ExportJobState.running(100, 400, 2.0);
-        assertEquals(6.0, s.secondsLeft(), 1e-9, "300 frames at 50 a second");
-        assertEquals("100 / 400 frames · 6 s left", s.shortText());
+    void progressGivesTheTimeLeftAtTheRateSinceTheFirstFrame() {
+        assertEquals(6.0, ExportJobState.secondsLeft(100, 2.0, 300), 1e-9, "300 frames at 50 a second");
+        assertTrue(ExportJobState.secondsLeft(4, 2.0, 300) < 0, "no estimate from 4 frames");
+        assertTrue(ExportJobState.secondsLeft(100, 0.2, 300) < 0, "no estimate within half a second");
+        assertEquals("100 / 400 frames · 6 s left", ExportJobState.running(100, 400, 6.0).shortText());
+        assertEquals("1 / 400 frames", ExportJobState.running(1, 400, -1).shortText());
         assertEquals("2 min 05 s", ExportJobState.timeLeft(124.2));
-        assertTrue(ExportJobState.running(0, 400, 1).secondsLeft() < 0, "no estimate before the first frame");
     }
 
     @Test
