@@ -94,21 +94,24 @@ final class ExportDialog extends JDialog {
         this.baseName = ExportPlan.baseName(projectFile);
         Project p = project.get();
         int last = p.video().frameCount() - 1;
-        overlayFrom = new JSpinner(new SpinnerNumberModel(0, 0, last, 1));
-        overlayTo = new JSpinner(new SpinnerNumberModel(last, 0, last, 1));
-        overlayTrail = new JSpinner(new SpinnerNumberModel(ExportPlan.DEFAULT_TRAIL, 0, 10_000, 1));
         Path remembered = prefs.exportFolder(projectFile);
-        folderField.setText((remembered != null ? remembered : projectFile.toAbsolutePath().getParent()).toString());
+        ExportPlan start = ExportPlan.defaults(projectFile, p,
+                remembered != null ? remembered : projectFile.toAbsolutePath().getParent());
+        folderField.setText(start.folder().toString());
+        overlayFrom = new JSpinner(new SpinnerNumberModel(start.overlayFrom(), 0, last, 1));
+        overlayTo = new JSpinner(new SpinnerNumberModel(start.overlayTo(), 0, last, 1));
+        overlayTrail = new JSpinner(new SpinnerNumberModel(start.overlayTrail(), 0, 10_000, 1));
         for (ExportItem item : ExportItem.values()) {
-            rows.put(item, new ExportRow(item, this::refresh, () -> {
+            ExportRow row = new ExportRow(item, this::refresh, () -> {
                 if (batch != null) {
                     batch.cancel(item);
                 }
-            }));
+            });
+            row.choose.setSelected(start.items().contains(item));
+            rows.put(item, row);
         }
-        rows.get(ExportItem.CSV).choose.setSelected(true);
         groundWasAvailable = ExportPlan.groundPlotsAvailable(p);
-        groundPlots.setSelected(groundWasAvailable);
+        groundPlots.setSelected(start.groundPlots());
         buildLayout();
         setDefaultCloseOperation(WindowConstants.HIDE_ON_CLOSE);
         addWindowListener(new WindowAdapter() {

@@ -92,7 +92,7 @@ final class ExportRunner implements AutoCloseable {
                 for (ExportItem item : items) {
                     AtomicBoolean cancelled = batch.cancel.get(item);
                     if (cancelled.get()) {
-                        listener.changed(item, ExportJobState.cancelled("cancelled before it started; nothing written"));
+                        listener.changed(item, ExportJobState.cancelled("stopped before it started; nothing written"));
                         continue;
                     }
                     listener.changed(item, ExportJobState.started());
@@ -154,8 +154,10 @@ final class ExportRunner implements AutoCloseable {
             }
             return ExportJobState.doneWith(plan.files(item), done);
         } catch (ExportCancelledException | CancellationException e) {
-            return ExportJobState.cancelled("cancelled; " + file.getFileName() + " was not written"
-                    + (Files.exists(file) ? " (the file there before is kept as it was)" : ""));
+            return ExportJobState.cancelled(file.getFileName() + " was not written"
+                    + (Files.exists(file) ? " (the file there before is kept as it was)" : "")
+                    + (item == ExportItem.COCO && plan.cocoFrames() ? "; the frame images written so far stay in "
+                    + plan.framesFolder().orElseThrow().getFileName() : ""));
         } catch (VideoException e) {
             return ExportJobState.failed(e.getMessage() + " — the export reads the project's video; put it back "
                     + "where the project says, or reopen the project.");
