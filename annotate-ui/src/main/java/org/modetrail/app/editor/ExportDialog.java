@@ -356,7 +356,7 @@ final class ExportDialog extends JDialog {
         };
         ColourBy colour = plotColour.getSelectedIndex() == 1 ? ColourBy.TRACK : ColourBy.CLASS;
         return new ExportPlan(folder.toAbsolutePath(), baseName, items, cocoFrames.isSelected(), formats, colour,
-                groundPlots.isSelected() && groundPlots.isEnabled(), (Integer) overlayFrom.getValue(),
+                groundPlots.isSelected() && ExportPlan.groundPlotsAvailable(project.get()), (Integer) overlayFrom.getValue(),
                 (Integer) overlayTo.getValue(), (Integer) overlayTrail.getValue());
     }
 
