@@ -877,8 +877,8 @@ public final class EditorWindow extends JFrame {
             exportDialog = ExportDialog.forSession(this, prefs, session,
                     text -> SwingUtilities.invokeLater(() -> status.setText(text)));
         }
-        exportDialog.refresh();
         exportDialog.setVisible(true);
+        exportDialog.refresh();
         exportDialog.toFront();
     }
 

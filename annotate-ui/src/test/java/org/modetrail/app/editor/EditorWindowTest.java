@@ -185,7 +185,11 @@ class EditorWindowTest {
         ScreenWait.untilStill(export);
         robot.click((java.awt.Component) robot.finder().findByName(export, "exportStart"));
         Path csv = dir.resolve("arena-tracks.csv");
-        waitFor(() -> Files.exists(dir.resolve("arena-tracks.csv.about.json")), "the export");
+        waitFor(() -> Files.exists(dir.resolve("arena-tracks.csv.about.json")), "the export, screen at "
+                + GuiActionRunner.execute(() -> export.getBounds() + " state " + export.state(ExportItem.CSV)
+                + " problem '" + ((javax.swing.JLabel) robot.finder().findByName(export, "exportProblem")).getText()
+                + "' folder " + ((javax.swing.JTextField) robot.finder().findByName(export, "exportFolder")).getText()
+                + " focus " + java.awt.KeyboardFocusManager.getCurrentKeyboardFocusManager().getFocusOwner()));
         assertEquals(1 + 450, Files.readAllLines(csv).size());
         waitFor(() -> GuiActionRunner.execute(() -> export.state(ExportItem.CSV) != null
                 && export.state(ExportItem.CSV).finished()), "the export screen to say it is done");
