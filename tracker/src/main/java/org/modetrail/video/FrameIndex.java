@@ -80,6 +80,15 @@ public final class FrameIndex {
         return (pts[n] - pts[0]) * (double) timeBaseNum / timeBaseDen;
     }
 
+    /** Every frame's {@link #timeSeconds}, a new array. */
+    public double[] timesSeconds() {
+        double[] t = new double[pts.length];
+        for (int i = 0; i < t.length; i++) {
+            t[i] = timeSeconds(i);
+        }
+        return t;
+    }
+
     public boolean isKeyframe(int n) {
         return keyframe[n];
     }

@@ -1,24 +1,15 @@
 package org.modetrail.app.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.function.IntToDoubleFunction;
 
-import org.modetrail.calibration.GroundSample;
-import org.modetrail.calibration.TrajectoryConfig;
 import org.modetrail.model.Project;
 import org.modetrail.picture.ColourBy;
 import org.modetrail.picture.PlotFormat;
-import org.modetrail.picture.PlotOptions;
-import org.modetrail.picture.Plots;
-import org.modetrail.picture.ProjectSeries;
-import org.modetrail.picture.TrajectoryPoint;
-import org.modetrail.summary.GroundPaths;
+import org.modetrail.picture.ProjectPlots;
 import org.modetrail.video.VideoSource;
 
 import picocli.CommandLine.Command;
@@ -33,11 +24,6 @@ import picocli.CommandLine.Model.CommandSpec;
                 + "its path on the ground (metres) and its speed over time with one standard uncertainty: "
                 + "trajectory-image, trajectory-ground and speed, as PNG and SVG files in DIR."})
 public final class PlotCommand implements Callable<Integer> {
-    /** What the files are called in DIR, without the extension. */
-    static final String IMAGE = "trajectory-image";
-    static final String GROUND = "trajectory-ground";
-    static final String SPEED = "speed";
-
     @Parameters(index = "0", paramLabel = "PROJECT.json", description = "the project to plot")
     Path projectFile;
 
@@ -76,30 +62,8 @@ public final class PlotCommand implements Callable<Integer> {
             double[] t = ProjectOpening.frameTimes(video);
             time = n -> t[n];
         }
-        Files.createDirectories(out);
         String name = projectFile.getFileName().toString().replaceFirst("\\.json$", "");
-        List<Path> written = new ArrayList<>();
-        for (PlotFormat f : formats) {
-            String ext = "." + f.name().toLowerCase(java.util.Locale.ROOT);
-            Path image = out.resolve(IMAGE + ext);
-            Plots.writeImageTrajectory(ProjectSeries.imagePlane(project, time, TrajectoryPoint.CONTACT, by),
-                    project.video().width(), project.video().height(),
-                    PlotOptions.defaults().withTitle(name + ": paths on the image"), f, image);
-            written.add(image);
-            if (project.site().calibration() != null) {
-                Map<Integer, List<GroundSample>> ground = GroundPaths.samples(project, time,
-                        TrajectoryConfig.defaults());
-                Path groundFile = out.resolve(GROUND + ext);
-                Plots.writeGroundTrajectory(ProjectSeries.groundPlane(project, ground, by),
-                        PlotOptions.defaults().withTitle(name + ": paths on the ground"), f, groundFile);
-                Path speedFile = out.resolve(SPEED + ext);
-                Plots.writeSpeed(ProjectSeries.speeds(project, ground, by),
-                        PlotOptions.defaults().withTitle(name + ": speed (band: one standard uncertainty)"), f,
-                        speedFile);
-                written.add(groundFile);
-                written.add(speedFile);
-            }
-        }
+        List<Path> written = ProjectPlots.all(project, formats, by).write(project, time, name, out, "");
         for (Path p : written) {
             stdout.println("wrote " + p);
         }

@@ -71,10 +71,6 @@ final class ProjectOpening {
 
     /** The presentation time of every frame, in seconds. */
     static double[] frameTimes(VideoSource source) {
-        double[] t = new double[source.frameCount()];
-        for (int i = 0; i < t.length; i++) {
-            t[i] = source.index().timeSeconds(i);
-        }
-        return t;
+        return source.index().timesSeconds();
     }
 }

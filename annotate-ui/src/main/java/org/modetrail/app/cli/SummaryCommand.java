@@ -4,7 +4,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
 
 import org.modetrail.format.project.ProjectFileException;
@@ -14,11 +13,8 @@ import org.modetrail.model.Project;
 import org.modetrail.model.Site;
 import org.modetrail.model.Zone;
 import org.modetrail.summary.CrossingDirection;
-import org.modetrail.summary.GroundPath;
-import org.modetrail.summary.GroundPaths;
 import org.modetrail.summary.MeasurementCaution;
-import org.modetrail.summary.SummaryCsv;
-import org.modetrail.summary.TrackSummaries;
+import org.modetrail.summary.ProjectSummary;
 import org.modetrail.summary.TrackSummary;
 import org.modetrail.video.VideoSource;
 
@@ -71,11 +67,10 @@ public final class SummaryCommand implements Callable<Integer> {
         try (VideoSource video = ProjectOpening.openVideo(project, projectFile)) {
             times = ProjectOpening.frameTimes(video);
         }
-        Map<Integer, GroundPath> paths = GroundPaths.of(project, times);
-        List<TrackSummary> summaries = TrackSummaries.of(project, times, paths);
-        print(stdout, project, summaries, !paths.isEmpty());
+        ProjectSummary summary = ProjectSummary.of(project, times);
+        print(stdout, project, summary.tracks(), summary.metres());
         if (out != null) {
-            SummaryCsv.write(summaries, project.site(), out);
+            summary.writeCsv(out);
             stdout.println("summary written to " + out);
         }
         return ExitCodes.OK;

@@ -8,8 +8,8 @@ import java.util.List;
 import java.util.prefs.Preferences;
 
 /**
- * What the editor remembers between runs: the theme, the window's place and size, the last folder and the recent
- * files. Kept in a {@link Preferences} node the caller gives (the user's by default, a scratch node in tests).
+ * What the editor remembers between runs: the theme, the window's place and size, the last folder, the recent
+ * files and the export folder chosen for each of the recent projects. Kept in a {@link Preferences} node the caller gives (the user's by default, a scratch node in tests).
  */
 final class EditorPreferences {
     static final int MAX_RECENT = 8;
@@ -74,6 +74,40 @@ final class EditorPreferences {
             }
         }
         return out;
+    }
+
+    /** The folder the user last exported {@code project} to, if it still exists; null when none was chosen. */
+    Path exportFolder(Path project) {
+        String key = project.toAbsolutePath().normalize().toString();
+        for (int i = 0; i < MAX_RECENT; i++) {
+            String s = node.get("export." + i, null);
+            int tab = s == null ? -1 : s.indexOf('\t');
+            if (tab > 0 && s.substring(0, tab).equals(key)) {
+                Path p = Path.of(s.substring(tab + 1));
+                return Files.isDirectory(p) ? p : null;
+            }
+        }
+        return null;
+    }
+
+    /** Remembers where {@code project} was exported to (the last {@value #MAX_RECENT} projects are kept). */
+    void setExportFolder(Path project, Path folder) {
+        String key = project.toAbsolutePath().normalize().toString();
+        List<String> list = new ArrayList<>();
+        list.add(key + "\t" + folder.toAbsolutePath().normalize());
+        for (int i = 0; i < MAX_RECENT; i++) {
+            String s = node.get("export." + i, null);
+            if (s != null && !s.startsWith(key + "\t")) {
+                list.add(s);
+            }
+        }
+        for (int i = 0; i < MAX_RECENT; i++) {
+            if (i < list.size()) {
+                node.put("export." + i, list.get(i));
+            } else {
+                node.remove("export." + i);
+            }
+        }
     }
 
     void addRecent(Path file) {

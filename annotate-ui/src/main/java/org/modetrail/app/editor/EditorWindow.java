@@ -42,9 +42,6 @@ import javax.swing.Timer;
 import javax.swing.TransferHandler;
 import javax.swing.WindowConstants;
 
-import org.modetrail.exports.ProjectExport;
-import org.modetrail.format.ExportProgress;
-import org.modetrail.format.TracksFormat;
 import org.modetrail.format.project.AutosaveConfig;
 import org.modetrail.format.project.ProjectAutosave;
 import org.modetrail.format.project.ProjectFileException;
@@ -133,6 +130,7 @@ public final class EditorWindow extends JFrame {
     });
     private String lastClass = "object";
     private double playbackRate = 1;
+    private ExportDialog exportDialog;
 
     public EditorWindow(EditorPreferences prefs, Runnable onClosed) {
         super("Modetrail");
@@ -243,7 +241,7 @@ public final class EditorWindow extends JFrame {
         add("File", "Open video or project…", "control O", this::chooseAndOpen);
         add("File", "Save", "control S", this::save);
         add("File", "Save as…", "control shift S", this::saveAs);
-        add("File", "Export tracks…", "control E", this::chooseExport);
+        add("File", "Export tracks, summary, plots, overlay…", "control E", this::showExport);
         add("File", "Close window", "control W", this::closeWindow);
         add("Edit", "Undo", "control Z", this::undo);
         add("Edit", "Redo", "control Y", this::redo);
@@ -577,11 +575,7 @@ public final class EditorWindow extends JFrame {
                 SwingUtilities.invokeLater(() -> status.setText(message));
             }
         });
-        double[] times = new double[fetcher.video().frameCount()];
-        for (int i = 0; i < times.length; i++) {
-            times[i] = fetcher.video().index().timeSeconds(i);
-        }
-        timeline.setFrameTimes(times);
+        timeline.setFrameTimes(fetcher.video().index().timesSeconds());
         projectShown(s.project());
         frame = 0;
         showFrame(0);
@@ -676,11 +670,19 @@ public final class EditorWindow extends JFrame {
     }
 
     private void closeWindow() {
+        if (exportDialog != null && exportDialog.busy() && JOptionPane.showConfirmDialog(this,
+                "Exports are still running. Stop them and close? (Files not finished are not written.)",
+                "Exports running", JOptionPane.YES_NO_OPTION) != JOptionPane.YES_OPTION) {
+            return;
+        }
         if (!confirmDiscard()) {
             return;
         }
         prefs.setWindowBounds(getBounds());
         closeSession();
+        if (exportDialog != null) {
+            exportDialog.dispose();
+        }
         dispose();
         onClosed.run();
     }
@@ -1006,43 +1008,30 @@ public final class EditorWindow extends JFrame {
 
     // ---------------------------------------------------------------- export
 
-    private void chooseExport() {
+    /**
+     * Opens the export screen for the open project (non-modal; one per project, kept while its jobs run, so
+     * closing and reopening it shows how they stand).
+     */
+    void showExport() {
         if (session == null) {
+            status.setText("Open a video or a project first (Ctrl+O)");
             return;
         }
-        JComboBox<TracksFormat> format = new JComboBox<>(TracksFormat.values());
-        format.setName("exportFormat");
-        if (JOptionPane.showConfirmDialog(this, format, "Export format (CSV, COCO-style JSON, MOTChallenge text)",
-                JOptionPane.OK_CANCEL_OPTION) != JOptionPane.OK_OPTION) {
-            return;
+        if (exportDialog == null || !exportDialog.isFor(session.projectFile())) {
+            if (exportDialog != null && !exportDialog.busy()) {
+                exportDialog.dispose();
+            }
+            exportDialog = ExportDialog.forSession(this, prefs, session,
+                    text -> SwingUtilities.invokeLater(() -> status.setText(text)));
         }
-        TracksFormat f = (TracksFormat) format.getSelectedItem();
-        JFileChooser chooser = new JFileChooser(session.projectFile().getParent().toFile());
-        String base = session.projectFile().getFileName().toString().replaceFirst("\\.json$", "");
-        chooser.setSelectedFile(new File(base + (f == TracksFormat.CSV ? ".csv" : f == TracksFormat.COCO
-                ? "-coco.json" : "-mot.txt")));
-        if (chooser.showSaveDialog(this) == JFileChooser.APPROVE_OPTION) {
-            exportTo(f, chooser.getSelectedFile().toPath());
-        }
+        exportDialog.setVisible(true);
+        exportDialog.refresh();
+        exportDialog.toFront();
     }
 
-    /** Exports the current project in the background; the status line says when and where it is done. */
-    void exportTo(TracksFormat format, Path out) {
-        Project p = session.project();
-        Path video = session.videoFile();
-        status.setText("Exporting " + format.commandName() + " to " + out.getFileName() + "…");
-        new Thread(() -> {
-            String done;
-            try (VideoSource v = VideoSource.open(video)) {
-                ProjectExport.Result r = ProjectExport.write(p, v, format, out, null, "Modetrail editor",
-                        ExportProgress.NONE);
-                done = "Exported to " + r.file() + " (notes in " + r.notes().getFileName() + ")";
-            } catch (IOException | RuntimeException e) {
-                done = "Export failed: " + e.getMessage();
-            }
-            String message = done;
-            SwingUtilities.invokeLater(() -> status.setText(message));
-        }, "editor-export").start();
+    /** The export screen, once opened (for tests). */
+    ExportDialog exportDialog() {
+        return exportDialog;
     }
 
     // ---------------------------------------------------------------- theme and help
@@ -1052,6 +1041,9 @@ public final class EditorWindow extends JFrame {
         prefs.setDarkTheme(dark);
         Themes.apply(dark);
         SwingUtilities.updateComponentTreeUI(this);
+        for (java.awt.Window owned : getOwnedWindows()) {
+            SwingUtilities.updateComponentTreeUI(owned);
+        }
         status.setText(dark ? "Dark theme" : "Light theme");
     }
 

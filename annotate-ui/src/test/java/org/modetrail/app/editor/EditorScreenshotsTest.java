@@ -33,7 +33,7 @@ import org.modetrail.model.SiteEdits;
 import org.modetrail.model.Zone;
 
 /**
- * Screenshots of the editor's main screen and its key list, in the light and the dark theme, on the arena demo
+ * Screenshots of the editor's main screen, its key list and its export screen, in the light and the dark theme, on the arena demo
  * tracked by the track command: written to target/screenshots (or -Dmodetrail.screenshotDir) for people to look
  * at, and checked here only for what a screenshot can show without judging taste: the picture has the window's
  * size and the theme's background.
@@ -97,6 +97,7 @@ class EditorScreenshotsTest {
             BufferedImage help = GuiActionRunner.execute(() -> paint(keys.getRootPane()));
             ImageIO.write(help, "png", out.resolve("editor-keys-" + theme + ".png").toFile());
             GuiActionRunner.execute(keys::dispose);
+            exportScreen(w, dir, theme, out);
         } finally {
             GuiActionRunner.execute(() -> {
                 try {
@@ -150,6 +151,43 @@ class EditorScreenshotsTest {
         });
         Thread.sleep(500);
         return GuiActionRunner.execute(() -> paint(w.getRootPane()));
+    }
+
+    /**
+     * The export screen twice: after writing the tracks CSV, the summary and the plots of the uncalibrated project
+     * (rows done, the ground plots off with the reason), then with a calibration stored (the caution shown).
+     */
+    private static void exportScreen(EditorWindow w, Path dir, String theme, Path out) throws Exception {
+        ExportDialog d = GuiActionRunner.execute(() -> {
+            w.showExport();
+            ExportDialog e = w.exportDialog();
+            e.setLocation(20, 20);
+            for (ExportItem i : List.of(ExportItem.SUMMARY, ExportItem.PLOTS)) {
+                ((javax.swing.AbstractButton) find(e, "export." + i.name())).doClick();
+            }
+            ((javax.swing.AbstractButton) find(e, "exportStart")).doClick();
+            return e;
+        });
+        long end = System.nanoTime() + Duration.ofSeconds(60).toNanos();
+        while (GuiActionRunner.execute(() -> d.state(ExportItem.PLOTS) == null || !d.state(ExportItem.PLOTS).finished())) {
+            assertTrue(System.nanoTime() < end, "the exports did not finish");
+            Thread.sleep(20);
+        }
+        Thread.sleep(300);
+        BufferedImage done = GuiActionRunner.execute(() -> paint(d.getRootPane()));
+        ImageIO.write(done, "png", out.resolve("editor-export-" + theme + ".png").toFile());
+        assertEquals(ExportJobState.Stage.DONE, GuiActionRunner.execute(() -> d.state(ExportItem.CSV).stage()));
+        GuiActionRunner.execute(() -> {
+            w.session().apply(CalibrationDialog.storeEdit(w.session().project(),
+                    ExportTestProjects.arenaCalibration()));
+            ((javax.swing.AbstractButton) find(d, "export.OVERLAY")).doClick();
+            d.refresh();
+        });
+        Thread.sleep(300);
+        BufferedImage calibrated = GuiActionRunner.execute(() -> paint(d.getRootPane()));
+        ImageIO.write(calibrated, "png", out.resolve("editor-export-calibrated-" + theme + ".png").toFile());
+        assertTrue(GuiActionRunner.execute(() -> find(d, "exportCaution").isVisible()), "the caution with speeds");
+        GuiActionRunner.execute(d::dispose);
     }
 
     private static PixelPoint pt(double x, double y) {

@@ -28,7 +28,6 @@ import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.modetrail.format.TracksFormat;
 import org.modetrail.format.project.ProjectFile;
 import org.modetrail.model.Box;
 import org.modetrail.model.BoxSource;
@@ -177,10 +176,24 @@ class EditorWindowTest {
         waitFor(() -> GuiActionRunner.execute(() -> window.session() != null
                 && window.session().projectFile().equals(projectFile) && window.frameCount() == 450), "reopen");
         assertEquals(450, project().tracks().get(0).frames().size());
-        Path csv = dir.resolve("arena.csv");
-        GuiActionRunner.execute(() -> window.exportTo(TracksFormat.CSV, csv));
-        waitFor(() -> Files.exists(dir.resolve("arena.csv.about.json")), "the export");
+        // Ctrl+E opens the export screen on the project's folder with the tracks CSV chosen; Export writes it.
+        robot.click((java.awt.Component) robot.finder().findByName(window, "status"));
+        control(KeyEvent.VK_E);
+        waitFor(() -> GuiActionRunner.execute(() -> window.exportDialog() != null
+                && window.exportDialog().isShowing()), "the export screen");
+        ExportDialog export = GuiActionRunner.execute(() -> window.exportDialog());
+        ScreenWait.untilStill(export);
+        robot.click((java.awt.Component) robot.finder().findByName(export, "exportStart"));
+        Path csv = dir.resolve("arena-tracks.csv");
+        waitFor(() -> Files.exists(dir.resolve("arena-tracks.csv.about.json")), "the export, screen at "
+                + GuiActionRunner.execute(() -> export.getBounds() + " state " + export.state(ExportItem.CSV)
+                + " problem '" + ((javax.swing.JLabel) robot.finder().findByName(export, "exportProblem")).getText()
+                + "' folder " + ((javax.swing.JTextField) robot.finder().findByName(export, "exportFolder")).getText()
+                + " focus " + java.awt.KeyboardFocusManager.getCurrentKeyboardFocusManager().getFocusOwner()));
         assertEquals(1 + 450, Files.readAllLines(csv).size());
+        waitFor(() -> GuiActionRunner.execute(() -> export.state(ExportItem.CSV) != null
+                && export.state(ExportItem.CSV).finished()), "the export screen to say it is done");
+        assertEquals(ExportJobState.Stage.DONE, GuiActionRunner.execute(() -> export.state(ExportItem.CSV).stage()));
     }
 
     @Test

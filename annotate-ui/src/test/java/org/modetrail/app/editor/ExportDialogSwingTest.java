@@ -1,0 +1,281 @@
+package org.modetrail.app.editor;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.Component;
+import java.awt.GraphicsEnvironment;
+import java.awt.event.KeyEvent;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+import java.time.Duration;
+import java.util.List;
+import java.util.TreeSet;
+import java.util.UUID;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BooleanSupplier;
+import java.util.prefs.Preferences;
+import java.util.stream.Stream;
+
+import javax.imageio.ImageIO;
+import javax.swing.AbstractButton;
+import javax.swing.JDialog;
+import javax.swing.JLabel;
+import javax.swing.JProgressBar;
+import javax.swing.JSpinner;
+import javax.swing.JTextField;
+
+import org.assertj.swing.core.BasicRobot;
+import org.assertj.swing.core.Robot;
+import org.assertj.swing.edt.GuiActionRunner;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.modetrail.format.coco.CocoReader;
+import org.modetrail.format.csv.TracksCsvReader;
+import org.modetrail.format.mot.MotReader;
+import org.modetrail.model.ObjectClass;
+import org.modetrail.model.Project;
+import org.modetrail.picture.PlotOptions;
+import org.modetrail.summary.SummaryCsv;
+import org.modetrail.video.VideoSource;
+
+/**
+ * The export screen in a real window under Xvfb, opened with Ctrl+E on a demo-like arena project: every tracks
+ * format, the summary and a plot written and read back with the importers and ImageIO; an existing file kept when
+ * the user says so; an overlay whose progress bar moves while the editor stays usable, and a cancelled one that
+ * says so and leaves no file.
+ */
+class ExportDialogSwingTest {
+    @TempDir
+    Path dir;
+    private Robot robot;
+    private EditorWindow window;
+    private Preferences node;
+    private Project project;
+
+    @BeforeEach
+    void start() throws Exception {
+        boolean x11 = !System.getenv().getOrDefault("DISPLAY", "").isBlank();
+        Assumptions.assumeTrue(!GraphicsEnvironment.isHeadless() && x11, "no display (CI runs this under Xvfb)");
+        Path file = ExportTestProjects.arena(dir);
+        project = org.modetrail.format.project.ProjectFile.read(file);
+        robot = BasicRobot.robotWithNewAwtHierarchy();
+        node = Preferences.userRoot().node("org/modetrail/editor-test-" + UUID.randomUUID());
+        window = GuiActionRunner.execute(() -> {
+            Themes.apply(false);
+            EditorWindow w = new EditorWindow(new EditorPreferences(node), () -> { });
+            w.setSize(1200, 820);
+            w.setLocation(0, 0);
+            w.setVisible(true);
+            w.open(file);
+            return w;
+        });
+        waitFor(() -> GuiActionRunner.execute(() -> window.session() != null && window.frameCount() == 450),
+                "the project to open");
+        robot.waitForIdle();
+        ScreenWait.untilStill(window);
+    }
+
+    @AfterEach
+    void stop() throws Exception {
+        if (robot != null) {
+            GuiActionRunner.execute(() -> {
+                if (window.exportDialog() != null) {
+                    window.exportDialog().dispose();
+                }
+                if (window.session() != null) {
+                    window.session().close();
+                }
+                window.dispose();
+            });
+            robot.cleanUp();
+            node.removeNode();
+        }
+    }
+
+    private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
+        long end = System.nanoTime() + Duration.ofSeconds(60).toNanos();
+        while (!condition.getAsBoolean()) {
+            if (System.nanoTime() > end) {
+                throw new AssertionError("timed out waiting for " + what);
+            }
+            Thread.sleep(10);
+        }
+    }
+
+    /** Ctrl+E on the main window, as a user would press it; the screen opens on the project's folder. */
+    private ExportDialog openScreen() throws InterruptedException {
+        robot.click(find(window, "status"));
+        robot.pressKey(KeyEvent.VK_CONTROL);
+        robot.pressAndReleaseKey(KeyEvent.VK_E);
+        robot.releaseKey(KeyEvent.VK_CONTROL);
+        waitFor(() -> GuiActionRunner.execute(() -> window.exportDialog() != null
+                && window.exportDialog().isShowing()), "the export screen");
+        ExportDialog d = GuiActionRunner.execute(() -> window.exportDialog());
+        robot.waitForIdle();
+        ScreenWait.untilStill(d);
+        assertEquals(dir.toAbsolutePath().toString(), GuiActionRunner.execute(() ->
+                ((JTextField) find(d, "exportFolder")).getText()), "the project's folder by default");
+        return d;
+    }
+
+    private Component find(java.awt.Container root, String name) {
+        return robot.finder().findByName(root, name, false);
+    }
+
+    private void choose(ExportDialog d, ExportItem item, boolean on) {
+        AbstractButton box = (AbstractButton) find(d, "export." + item.name());
+        if (GuiActionRunner.execute(box::isSelected) != on) {
+            robot.click(box);
+        }
+    }
+
+    private void waitUntilFinished(ExportDialog d, ExportItem... items) throws InterruptedException {
+        waitFor(() -> GuiActionRunner.execute(() -> {
+            for (ExportItem i : items) {
+                if (d.state(i) == null || !d.state(i).finished()) {
+                    return false;
+                }
+            }
+            return true;
+        }), "the jobs " + List.of(items));
+    }
+
+    private String text(ExportDialog d, String name) {
+        return GuiActionRunner.execute(() -> ((JLabel) find(d, name)).getText());
+    }
+
+    @Test
+    void everyTracksFormatTheSummaryAndAPlotAreWrittenAndReadBack() throws Exception {
+        ExportDialog d = openScreen();
+        // No calibration: the ground plots are off and say why; no caution since nothing is in metres.
+        assertFalse(GuiActionRunner.execute(() -> find(d, "groundPlots").isEnabled()));
+        assertTrue(text(d, "groundReason").contains("ground calibration"), text(d, "groundReason"));
+        assertFalse(GuiActionRunner.execute(() -> find(d, "exportCaution").isVisible()));
+        assertTrue(text(d, "exportFiles.CSV").contains("will write arena-tracks.csv"), "named before writing");
+        for (ExportItem i : List.of(ExportItem.COCO, ExportItem.MOT, ExportItem.SUMMARY, ExportItem.PLOTS)) {
+            choose(d, i, true);
+        }
+        robot.click(find(d, "exportStart"));
+        ExportItem[] items = {ExportItem.CSV, ExportItem.COCO, ExportItem.MOT, ExportItem.SUMMARY, ExportItem.PLOTS};
+        waitUntilFinished(d, items);
+        for (ExportItem i : items) {
+            ExportJobState s = GuiActionRunner.execute(() -> d.state(i));
+            assertEquals(ExportJobState.Stage.DONE, s.stage(), i + ": " + s.message());
+        }
+        assertTrue(text(d, "exportFiles.CSV").contains("Done"), text(d, "exportFiles.CSV"));
+
+        // Read back with the importers: the three animals with every box the project holds.
+        Project csv = TracksCsvReader.read(dir.resolve("arena-tracks.csv"), project.video());
+        Project coco = CocoReader.read(dir.resolve("arena-coco.json"), project.video());
+        Project mot = MotReader.read(dir.resolve("arena-mot.txt"), project.video(), new ObjectClass("animal", 0));
+        for (Project back : List.of(csv, coco, mot)) {
+            assertEquals(3, back.tracks().size());
+            for (int t = 0; t < 3; t++) {
+                assertEquals(project.tracks().get(t).frames().size(), back.tracks().get(t).frames().size());
+            }
+        }
+        assertTrue(Files.exists(dir.resolve("arena-coco.json.about.json")));
+        List<String> summary = Files.readAllLines(dir.resolve("arena-summary.csv"));
+        assertTrue(summary.get(0).startsWith(SummaryCsv.FIXED_HEADER), summary.get(0));
+        assertEquals(1 + 3, summary.size(), "one row per track");
+        BufferedImage plot = ImageIO.read(dir.resolve("arena-trajectory-image.png").toFile());
+        assertEquals(PlotOptions.DEFAULT_WIDTH, plot.getWidth(), "the plot command's size");
+        assertEquals(PlotOptions.DEFAULT_HEIGHT, plot.getHeight());
+        assertFalse(Files.exists(dir.resolve("arena-trajectory-ground.png")), "no ground plot uncalibrated");
+
+        // Export again: the files exist, the user keeps them, nothing is written.
+        Path csvFile = dir.resolve("arena-tracks.csv");
+        Files.setLastModifiedTime(csvFile, FileTime.fromMillis(1_000_000_000_000L));
+        robot.click(find(d, "exportStart"));
+        JDialog ask = waitForOtherDialog(d);
+        assertTrue(GuiActionRunner.execute(() -> ask.getTitle()).contains("Replace"));
+        robot.click(robot.finder().find(ask, c -> c instanceof AbstractButton b && "Keep them".equals(b.getText())));
+        waitFor(() -> !GuiActionRunner.execute(ask::isShowing), "the question to close");
+        assertTrue(text(d, "exportProblem").startsWith("Nothing written"), text(d, "exportProblem"));
+        assertEquals(1_000_000_000_000L, Files.getLastModifiedTime(csvFile).toMillis(), "kept as it was");
+    }
+
+    @Test
+    void anOverlayShowsItsProgressAndACancelledOneLeavesNoFile() throws Exception {
+        ExportDialog d = openScreen();
+        choose(d, ExportItem.CSV, false);
+        choose(d, ExportItem.OVERLAY, true);
+        GuiActionRunner.execute(() -> ((JSpinner) find(d, "overlayTo")).setValue(119));
+        robot.click(find(d, "exportStart"));
+        JProgressBar bar = (JProgressBar) find(d, "exportBar.OVERLAY");
+        TreeSet<Integer> seen = new TreeSet<>();
+        long end = System.nanoTime() + Duration.ofSeconds(60).toNanos();
+        while (!GuiActionRunner.execute(() -> d.state(ExportItem.OVERLAY) != null
+                && d.state(ExportItem.OVERLAY).finished()) && System.nanoTime() < end) {
+            int v = GuiActionRunner.execute(bar::getValue);
+            if (v > 0 && v < 1000) {
+                seen.add(v);
+            }
+            Thread.sleep(5);
+        }
+        ExportJobState done = GuiActionRunner.execute(() -> d.state(ExportItem.OVERLAY));
+        assertEquals(ExportJobState.Stage.DONE, done.stage(), done.message());
+        assertTrue(seen.size() >= 2, "the bar moved through " + seen);
+        Path video = dir.resolve("arena-overlay.mp4");
+        try (VideoSource v = VideoSource.open(video)) {
+            assertEquals(120, v.frameCount(), "frames 0 to 119");
+        }
+
+        // The whole clip into a new folder, cancelled once it runs; meanwhile the editor still steps frames.
+        Path other = dir.resolve("cancelled");
+        GuiActionRunner.execute(() -> {
+            ((JTextField) find(d, "exportFolder")).setText(other.toString());
+            ((JSpinner) find(d, "overlayTo")).setValue(449);
+        });
+        robot.click(find(d, "exportStart"));
+        waitFor(() -> GuiActionRunner.execute(() -> d.state(ExportItem.OVERLAY) != null
+                && d.state(ExportItem.OVERLAY).done() > 0), "the overlay to run");
+        // A picture of the screen mid-run, for people to look at (beside EditorScreenshotsTest's).
+        Path shots = Files.createDirectories(Path.of(System.getProperty("modetrail.screenshotDir",
+                "target/screenshots")));
+        BufferedImage running = GuiActionRunner.execute(() -> {
+            BufferedImage img = new BufferedImage(d.getRootPane().getWidth(), d.getRootPane().getHeight(),
+                    BufferedImage.TYPE_INT_RGB);
+            java.awt.Graphics2D g = img.createGraphics();
+            d.getRootPane().paint(g);
+            g.dispose();
+            return img;
+        });
+        ImageIO.write(running, "png", shots.resolve("editor-export-running-light.png").toFile());
+        robot.click(find(window, "status"));
+        robot.pressAndReleaseKey(KeyEvent.VK_RIGHT);
+        waitFor(() -> GuiActionRunner.execute(() -> window.currentFrame() == 1), "the editor to step meanwhile");
+        robot.click(find(d, "exportCancel.OVERLAY"));
+        waitUntilFinished(d, ExportItem.OVERLAY);
+        ExportJobState cancelled = GuiActionRunner.execute(() -> d.state(ExportItem.OVERLAY));
+        assertEquals(ExportJobState.Stage.CANCELLED, cancelled.stage(), cancelled.message());
+        assertEquals("cancelled", GuiActionRunner.execute(bar::getString));
+        assertTrue(text(d, "exportFiles.OVERLAY").contains("Cancelled:"), text(d, "exportFiles.OVERLAY"));
+        try (Stream<Path> left = Files.list(other)) {
+            assertEquals(List.of(), left.toList(), "no partial video, no temporary file");
+        }
+    }
+
+    private JDialog waitForOtherDialog(JDialog besides) throws InterruptedException {
+        AtomicReference<JDialog> found = new AtomicReference<>();
+        waitFor(() -> GuiActionRunner.execute(() -> {
+            for (java.awt.Window w : java.awt.Window.getWindows()) {
+                if (w instanceof JDialog j && j != besides && j.isShowing()) {
+                    found.set(j);
+                    return true;
+                }
+            }
+            return false;
+        }), "a question");
+        robot.waitForIdle();
+        ScreenWait.untilStill(found.get());
+        return found.get();
+    }
+}
