@@ -4,27 +4,18 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.awt.GraphicsEnvironment;
 import java.awt.Point;
 import java.awt.event.KeyEvent;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Duration;
-import java.util.UUID;
 import java.util.concurrent.atomic.AtomicReference;
-import java.util.function.BooleanSupplier;
-import java.util.prefs.Preferences;
 
 import javax.swing.JDialog;
-import javax.swing.JOptionPane;
-import javax.swing.SwingUtilities;
 
-import org.assertj.swing.core.BasicRobot;
 import org.assertj.swing.core.MouseButton;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -46,49 +37,21 @@ class EditorWindowTest {
 
     @TempDir
     Path dir;
+    private EditorWindowFixture fixture;
     private Robot robot;
     private EditorWindow window;
-    private Preferences node;
 
     @BeforeEach
     void start() throws InterruptedException {
-        boolean x11 = !System.getenv().getOrDefault("DISPLAY", "").isBlank();
-        Assumptions.assumeTrue(!GraphicsEnvironment.isHeadless() && x11, "no display (CI runs this under Xvfb)");
-        robot = BasicRobot.robotWithNewAwtHierarchy();
-        node = Preferences.userRoot().node("org/modetrail/editor-test-" + UUID.randomUUID());
-        window = GuiActionRunner.execute(() -> {
-            Themes.apply(false);
-            EditorWindow w = new EditorWindow(new EditorPreferences(node), () -> { });
-            w.setSize(1200, 820);
-            w.setLocation(0, 0);
-            w.setVisible(true);
-            return w;
-        });
-        robot.waitForIdle();
-        ScreenWait.untilStill(window);
+        fixture = EditorWindowFixture.open();
+        robot = fixture.robot;
+        window = fixture.window;
     }
 
     @AfterEach
     void stop() throws Exception {
-        if (robot != null) {
-            GuiActionRunner.execute(() -> {
-                if (window.session() != null) {
-                    window.session().close();
-                }
-                window.dispose();
-            });
-            robot.cleanUp();
-            node.removeNode();
-        }
-    }
-
-    private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
-        long end = System.nanoTime() + Duration.ofSeconds(60).toNanos();
-        while (!condition.getAsBoolean()) {
-            if (System.nanoTime() > end) {
-                throw new AssertionError("timed out waiting for " + what);
-            }
-            Thread.sleep(20);
+        if (fixture != null) {
+            fixture.close();
         }
     }
 
@@ -122,7 +85,7 @@ class EditorWindowTest {
     private Path openCopyOfTheClip() throws Exception {
         Path clip = Files.copy(CLIP, dir.resolve("arena.mp4"));
         GuiActionRunner.execute(() -> window.open(clip));
-        waitFor(() -> GuiActionRunner.execute(() -> window.session() != null && findFrameView().frame() == 0),
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.session() != null && findFrameView().frame() == 0),
                 "the clip to open and show frame 0");
         robot.waitForIdle();
         return clip;
@@ -135,8 +98,8 @@ class EditorWindowTest {
         drag(onScreen(ANIMAL.x(), ANIMAL.y()), onScreen(ANIMAL.right(), ANIMAL.bottom()));
         JDialog classDialog = waitForDialog();
         robot.pressAndReleaseKey(KeyEvent.VK_ENTER);
-        waitFor(() -> !classDialog.isShowing(), "the class dialog to close");
-        waitFor(() -> project().tracks().size() == 1 && !window.session().isTracking(), "tracking");
+        EditorWindowFixture.waitFor(() -> !classDialog.isShowing(), "the class dialog to close");
+        EditorWindowFixture.waitFor(() -> project().tracks().size() == 1 && !window.session().isTracking(), "tracking");
         Track t = project().tracks().get(0);
         assertEquals(450, t.frames().size(), "one box drawn, the whole clip tracked");
         Box drawn = t.at(0).orElseThrow().box();
@@ -153,45 +116,45 @@ class EditorWindowTest {
         for (int i = 0; i < 10; i++) {
             robot.pressAndReleaseKey(KeyEvent.VK_RIGHT);
         }
-        waitFor(() -> GuiActionRunner.execute(() -> window.currentFrame() == 10 && findFrameView().frame() == 10),
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.currentFrame() == 10 && findFrameView().frame() == 10),
                 "frame 10, at " + GuiActionRunner.execute(() -> window.currentFrame() + " active " + window.isActive()
                         + " focus " + java.awt.KeyboardFocusManager.getCurrentKeyboardFocusManager().getFocusOwner()));
         Box at10 = t.at(10).orElseThrow().box();
         drag(onScreen(at10.centreX(), at10.centreY()), onScreen(at10.centreX() + 6, at10.centreY()));
-        waitFor(() -> project().tracks().get(0).at(10).orElseThrow().source() == BoxSource.KEYFRAME,
+        EditorWindowFixture.waitFor(() -> project().tracks().get(0).at(10).orElseThrow().source() == BoxSource.KEYFRAME,
                 "the corrected box to become a keyframe");
         assertEquals(at10.x() + 6, project().tracks().get(0).at(10).orElseThrow().box().x(), 2);
-        waitFor(() -> !window.session().isTracking(), "retracking");
+        EditorWindowFixture.waitFor(() -> !window.session().isTracking(), "retracking");
 
         // Undo takes the correction back.
         control(KeyEvent.VK_Z);
-        waitFor(() -> project().tracks().get(0).at(10).orElseThrow().source() != BoxSource.KEYFRAME, "undo");
+        EditorWindowFixture.waitFor(() -> project().tracks().get(0).at(10).orElseThrow().source() != BoxSource.KEYFRAME, "undo");
 
         // Save, reopen in a new session, export.
         control(KeyEvent.VK_S);
         Path projectFile = EditorWindow.projectFileFor(clip);
-        waitFor(() -> Files.exists(projectFile) && !window.session().isDirty(), "the save");
+        EditorWindowFixture.waitFor(() -> Files.exists(projectFile) && !window.session().isDirty(), "the save");
         assertEquals(1, ProjectFile.read(projectFile).tracks().size());
         GuiActionRunner.execute(() -> window.open(projectFile));
-        waitFor(() -> GuiActionRunner.execute(() -> window.session() != null
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.session() != null
                 && window.session().projectFile().equals(projectFile) && window.frameCount() == 450), "reopen");
         assertEquals(450, project().tracks().get(0).frames().size());
         // Ctrl+E opens the export screen on the project's folder with the tracks CSV chosen; Export writes it.
         robot.click((java.awt.Component) robot.finder().findByName(window, "status"));
         control(KeyEvent.VK_E);
-        waitFor(() -> GuiActionRunner.execute(() -> window.exportDialog() != null
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.exportDialog() != null
                 && window.exportDialog().isShowing()), "the export screen");
         ExportDialog export = GuiActionRunner.execute(() -> window.exportDialog());
         ScreenWait.untilStill(export);
         robot.click((java.awt.Component) robot.finder().findByName(export, "exportStart"));
         Path csv = dir.resolve("arena-tracks.csv");
-        waitFor(() -> Files.exists(dir.resolve("arena-tracks.csv.about.json")), "the export, screen at "
+        EditorWindowFixture.waitFor(() -> Files.exists(dir.resolve("arena-tracks.csv.about.json")), "the export, screen at "
                 + GuiActionRunner.execute(() -> export.getBounds() + " state " + export.state(ExportItem.CSV)
                 + " problem '" + ((javax.swing.JLabel) robot.finder().findByName(export, "exportProblem")).getText()
                 + "' folder " + ((javax.swing.JTextField) robot.finder().findByName(export, "exportFolder")).getText()
                 + " focus " + java.awt.KeyboardFocusManager.getCurrentKeyboardFocusManager().getFocusOwner()));
         assertEquals(1 + 450, Files.readAllLines(csv).size());
-        waitFor(() -> GuiActionRunner.execute(() -> export.state(ExportItem.CSV) != null
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> export.state(ExportItem.CSV) != null
                 && export.state(ExportItem.CSV).finished()), "the export screen to say it is done");
         assertEquals(ExportJobState.Stage.DONE, GuiActionRunner.execute(() -> export.state(ExportItem.CSV).stage()));
     }
@@ -211,7 +174,7 @@ class EditorWindowTest {
         String text = GuiActionRunner.execute(() -> messageOf(error));
         assertTrue(text.contains("broken.json") && text.contains("line"), text);
         robot.pressAndReleaseKey(KeyEvent.VK_ENTER);
-        waitFor(() -> !error.isShowing(), "the message to close");
+        EditorWindowFixture.waitFor(() -> !error.isShowing(), "the message to close");
         assertEquals(450, GuiActionRunner.execute(() -> window.frameCount()), "the open clip is still there");
 
         // A video cut short after its first 20 kB (a copy that did not finish): named, explained, nothing lost.
@@ -222,7 +185,7 @@ class EditorWindowTest {
         String cutText = GuiActionRunner.execute(() -> messageOf(cutError));
         assertTrue(cutText.contains("cut.mp4"), cutText);
         robot.pressAndReleaseKey(KeyEvent.VK_ENTER);
-        waitFor(() -> !cutError.isShowing(), "the message to close");
+        EditorWindowFixture.waitFor(() -> !cutError.isShowing(), "the message to close");
         assertEquals(450, GuiActionRunner.execute(() -> window.frameCount()), "the open clip is still there");
         assertTrue(GuiActionRunner.execute(() -> window.session().videoFile().getFileName().toString())
                 .equals("arena.mp4"));
@@ -237,7 +200,7 @@ class EditorWindowTest {
 
     private JDialog waitForDialog() throws InterruptedException {
         AtomicReference<JDialog> found = new AtomicReference<>();
-        waitFor(() -> {
+        EditorWindowFixture.waitFor(() -> {
             for (java.awt.Window w : java.awt.Window.getWindows()) {
                 if (w instanceof JDialog d && d.isShowing()) {
                     found.set(d);

@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.Component;
-import java.awt.GraphicsEnvironment;
 import java.awt.event.KeyEvent;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
@@ -14,10 +13,7 @@ import java.nio.file.attribute.FileTime;
 import java.time.Duration;
 import java.util.List;
 import java.util.TreeSet;
-import java.util.UUID;
 import java.util.concurrent.atomic.AtomicReference;
-import java.util.function.BooleanSupplier;
-import java.util.prefs.Preferences;
 import java.util.stream.Stream;
 
 import javax.imageio.ImageIO;
@@ -28,11 +24,9 @@ import javax.swing.JProgressBar;
 import javax.swing.JSpinner;
 import javax.swing.JTextField;
 
-import org.assertj.swing.core.BasicRobot;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -54,58 +48,30 @@ import org.modetrail.video.VideoSource;
 class ExportDialogSwingTest {
     @TempDir
     Path dir;
+    private EditorWindowFixture fixture;
     private Robot robot;
     private EditorWindow window;
-    private Preferences node;
     private Project project;
 
     @BeforeEach
     void start() throws Exception {
-        boolean x11 = !System.getenv().getOrDefault("DISPLAY", "").isBlank();
-        Assumptions.assumeTrue(!GraphicsEnvironment.isHeadless() && x11, "no display (CI runs this under Xvfb)");
+        EditorWindowFixture.assumeDisplay();
         Path file = ExportTestProjects.arena(dir);
         project = org.modetrail.format.project.ProjectFile.read(file);
-        robot = BasicRobot.robotWithNewAwtHierarchy();
-        node = Preferences.userRoot().node("org/modetrail/editor-test-" + UUID.randomUUID());
-        window = GuiActionRunner.execute(() -> {
-            Themes.apply(false);
-            EditorWindow w = new EditorWindow(new EditorPreferences(node), () -> { });
-            w.setSize(1200, 820);
-            w.setLocation(0, 0);
-            w.setVisible(true);
-            w.open(file);
-            return w;
-        });
-        waitFor(() -> GuiActionRunner.execute(() -> window.session() != null && window.frameCount() == 450),
-                "the project to open");
+        fixture = EditorWindowFixture.open();
+        robot = fixture.robot;
+        window = fixture.window;
+        GuiActionRunner.execute(() -> window.open(file));
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.session() != null
+                && window.frameCount() == 450), "the project to open");
         robot.waitForIdle();
         ScreenWait.untilStill(window);
     }
 
     @AfterEach
     void stop() throws Exception {
-        if (robot != null) {
-            GuiActionRunner.execute(() -> {
-                if (window.exportDialog() != null) {
-                    window.exportDialog().dispose();
-                }
-                if (window.session() != null) {
-                    window.session().close();
-                }
-                window.dispose();
-            });
-            robot.cleanUp();
-            node.removeNode();
-        }
-    }
-
-    private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
-        long end = System.nanoTime() + Duration.ofSeconds(60).toNanos();
-        while (!condition.getAsBoolean()) {
-            if (System.nanoTime() > end) {
-                throw new AssertionError("timed out waiting for " + what);
-            }
-            Thread.sleep(10);
+        if (fixture != null) {
+            fixture.close();
         }
     }
 
@@ -115,7 +81,7 @@ class ExportDialogSwingTest {
         robot.pressKey(KeyEvent.VK_CONTROL);
         robot.pressAndReleaseKey(KeyEvent.VK_E);
         robot.releaseKey(KeyEvent.VK_CONTROL);
-        waitFor(() -> GuiActionRunner.execute(() -> window.exportDialog() != null
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.exportDialog() != null
                 && window.exportDialog().isShowing()), "the export screen");
         ExportDialog d = GuiActionRunner.execute(() -> window.exportDialog());
         robot.waitForIdle();
@@ -137,7 +103,7 @@ class ExportDialogSwingTest {
     }
 
     private void waitUntilFinished(ExportDialog d, ExportItem... items) throws InterruptedException {
-        waitFor(() -> GuiActionRunner.execute(() -> {
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> {
             for (ExportItem i : items) {
                 if (d.state(i) == null || !d.state(i).finished()) {
                     return false;
@@ -215,7 +181,7 @@ class ExportDialogSwingTest {
         JDialog ask = waitForOtherDialog(d);
         assertTrue(GuiActionRunner.execute(() -> ask.getTitle()).contains("Replace"));
         robot.click(robot.finder().find(ask, c -> c instanceof AbstractButton b && "Keep them".equals(b.getText())));
-        waitFor(() -> !GuiActionRunner.execute(ask::isShowing), "the question to close");
+        EditorWindowFixture.waitFor(() -> !GuiActionRunner.execute(ask::isShowing), "the question to close");
         assertTrue(text(d, "exportProblem").startsWith("Nothing written"), text(d, "exportProblem"));
         assertEquals(1_000_000_000_000L, Files.getLastModifiedTime(csvFile).toMillis(), "kept as it was");
     }
@@ -253,7 +219,7 @@ class ExportDialogSwingTest {
             ((JSpinner) find(d, "overlayTo")).setValue(449);
         });
         start(d, ExportItem.OVERLAY);
-        waitFor(() -> GuiActionRunner.execute(() -> d.state(ExportItem.OVERLAY) != null
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> d.state(ExportItem.OVERLAY) != null
                 && d.state(ExportItem.OVERLAY).done() > 0), "the overlay to run");
         // A picture of the screen mid-run, for people to look at (beside EditorScreenshotsTest's).
         Path shots = Files.createDirectories(Path.of(System.getProperty("modetrail.screenshotDir",
@@ -269,7 +235,7 @@ class ExportDialogSwingTest {
         ImageIO.write(running, "png", shots.resolve("editor-export-running-light.png").toFile());
         robot.click(find(window, "status"));
         robot.pressAndReleaseKey(KeyEvent.VK_RIGHT);
-        waitFor(() -> GuiActionRunner.execute(() -> window.currentFrame() == 1), "the editor to step meanwhile");
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.currentFrame() == 1), "the editor to step meanwhile");
         robot.click(find(d, "exportCancel.OVERLAY"));
         waitUntilFinished(d, ExportItem.OVERLAY);
         ExportJobState cancelled = GuiActionRunner.execute(() -> d.state(ExportItem.OVERLAY));
@@ -283,7 +249,7 @@ class ExportDialogSwingTest {
 
     private JDialog waitForOtherDialog(JDialog besides) throws InterruptedException {
         AtomicReference<JDialog> found = new AtomicReference<>();
-        waitFor(() -> GuiActionRunner.execute(() -> {
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> {
             for (java.awt.Window w : java.awt.Window.getWindows()) {
                 if (w instanceof JDialog j && j != besides && j.isShowing()) {
                     found.set(j);

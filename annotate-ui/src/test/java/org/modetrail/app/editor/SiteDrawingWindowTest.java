@@ -4,32 +4,25 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.awt.GraphicsEnvironment;
 import java.awt.Point;
 import java.awt.event.KeyEvent;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.UUID;
 import java.util.concurrent.atomic.AtomicReference;
-import java.util.function.BooleanSupplier;
-import java.util.prefs.Preferences;
 
 import javax.swing.JDialog;
 import javax.swing.JLabel;
 import javax.swing.KeyStroke;
 
-import org.assertj.swing.core.BasicRobot;
 import org.assertj.swing.core.MouseButton;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -65,53 +58,25 @@ class SiteDrawingWindowTest {
 
     @TempDir
     Path dir;
+    private EditorWindowFixture fixture;
     private Robot robot;
     private EditorWindow window;
-    private Preferences node;
 
     @BeforeEach
     void start() throws InterruptedException {
-        boolean x11 = !System.getenv().getOrDefault("DISPLAY", "").isBlank();
-        Assumptions.assumeTrue(!GraphicsEnvironment.isHeadless() && x11, "no display (CI runs this under Xvfb)");
-        robot = BasicRobot.robotWithNewAwtHierarchy();
-        node = Preferences.userRoot().node("org/modetrail/editor-site-test-" + UUID.randomUUID());
-        window = GuiActionRunner.execute(() -> {
-            Themes.apply(false);
-            EditorWindow w = new EditorWindow(new EditorPreferences(node), () -> { });
-            w.setSize(1200, 820);
-            w.setLocation(0, 0);
-            w.setVisible(true);
-            return w;
-        });
-        robot.waitForIdle();
-        ScreenWait.untilStill(window);
+        fixture = EditorWindowFixture.open();
+        robot = fixture.robot;
+        window = fixture.window;
     }
 
     @AfterEach
     void stop() throws Exception {
-        if (robot != null) {
-            GuiActionRunner.execute(() -> {
-                if (window.session() != null) {
-                    window.session().close();
-                }
-                window.dispose();
-            });
-            robot.cleanUp();
-            node.removeNode();
+        if (fixture != null) {
+            fixture.close();
         }
     }
 
     // ------------------------------------------------------------------------------------------------ helpers
-
-    private static void waitFor(BooleanSupplier condition, String what) throws InterruptedException {
-        long end = System.nanoTime() + Duration.ofSeconds(30).toNanos();
-        while (!condition.getAsBoolean()) {
-            if (System.nanoTime() > end) {
-                throw new AssertionError("timed out waiting for " + what);
-            }
-            Thread.sleep(20);
-        }
-    }
 
     private Project project() {
         return GuiActionRunner.execute(() -> window.session().project());
@@ -172,7 +137,7 @@ class SiteDrawingWindowTest {
 
     private JDialog waitForDialog() throws InterruptedException {
         AtomicReference<JDialog> found = new AtomicReference<>();
-        waitFor(() -> {
+        EditorWindowFixture.waitFor(() -> {
             for (java.awt.Window w : java.awt.Window.getWindows()) {
                 if (w instanceof JDialog d && d.isShowing()) {
                     found.set(d);
@@ -190,13 +155,13 @@ class SiteDrawingWindowTest {
     private void answerName(String name) throws InterruptedException {
         JDialog d = waitForDialog();
         javax.swing.JTextField field = robot.finder().findByType(d, javax.swing.JTextField.class);
-        waitFor(() -> GuiActionRunner.execute(field::isFocusOwner), "the name field to have the focus");
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(field::isFocusOwner), "the name field to have the focus");
         if (name != null) {
             GuiActionRunner.execute(field::selectAll);
             robot.enterText(name);
         }
         key(KeyEvent.VK_ENTER);
-        waitFor(() -> !d.isShowing(), "the name dialog to close");
+        EditorWindowFixture.waitFor(() -> !d.isShowing(), "the name dialog to close");
         focusWindow();
     }
 
@@ -204,7 +169,7 @@ class SiteDrawingWindowTest {
     private Path openClipWithTrack() throws Exception {
         Path clip = Files.copy(CLIP, dir.resolve("arena.mp4"));
         GuiActionRunner.execute(() -> window.open(clip));
-        waitFor(() -> GuiActionRunner.execute(() -> window.session() != null && frameView().frame() == 0),
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.session() != null && frameView().frame() == 0),
                 "the clip to open and show frame 0");
         List<FrameAnnotation> keys = new ArrayList<>();
         for (String line : Files.readAllLines(Path.of("..", "clips", "arena-truth.csv"))) {
@@ -245,7 +210,7 @@ class SiteDrawingWindowTest {
         }
         clickAt(new PixelPoint(NEST.get(0).x() + 1, NEST.get(0).y() + 1));
         answerName("nest");
-        waitFor(() -> project().site().zones().size() == 1, "the zone in the project");
+        EditorWindowFixture.waitFor(() -> project().site().zones().size() == 1, "the zone in the project");
         Zone zone = project().site().zones().get(0);
         assertEquals("nest", zone.name());
         assertEquals(4, zone.polygon().size());
@@ -257,7 +222,7 @@ class SiteDrawingWindowTest {
         key(KeyEvent.VK_L);
         drag(GATE_FROM, GATE_TO);
         answerName(null);
-        waitFor(() -> project().site().lines().size() == 1, "the line in the project");
+        EditorWindowFixture.waitFor(() -> project().site().lines().size() == 1, "the line in the project");
         CountingLine line = project().site().lines().get(0);
         assertEquals("line 1", line.name());
         assertNear(GATE_FROM, line.from());
@@ -267,18 +232,18 @@ class SiteDrawingWindowTest {
 
         // Undo takes the line back, redo brings it again; the zone stays throughout.
         control(KeyEvent.VK_Z);
-        waitFor(() -> project().site().lines().isEmpty(), "undo of the line");
+        EditorWindowFixture.waitFor(() -> project().site().lines().isEmpty(), "undo of the line");
         assertEquals(1, project().site().zones().size());
         control(KeyEvent.VK_Y);
-        waitFor(() -> project().site().lines().size() == 1, "redo of the line");
+        EditorWindowFixture.waitFor(() -> project().site().lines().size() == 1, "redo of the line");
 
         // Save, reopen in a new session: both are in the file and in the reopened project.
         control(KeyEvent.VK_S);
         Path projectFile = EditorWindow.projectFileFor(clip);
-        waitFor(() -> Files.exists(projectFile) && !window.session().isDirty(), "the save");
+        EditorWindowFixture.waitFor(() -> Files.exists(projectFile) && !window.session().isDirty(), "the save");
         assertEquals(List.of("nest"), ProjectFile.read(projectFile).site().zones().stream().map(Zone::name).toList());
         GuiActionRunner.execute(() -> window.open(projectFile));
-        waitFor(() -> GuiActionRunner.execute(() -> window.session() != null
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> window.session() != null
                 && window.session().projectFile().equals(projectFile) && window.frameCount() == 450), "reopen");
         Project reopened = project();
         assertEquals(zone, reopened.site().zones().get(0));
@@ -319,14 +284,14 @@ class SiteDrawingWindowTest {
         JDialog d = waitForDialog();
         javax.swing.JTextField field = robot.finder().findByType(d, javax.swing.JTextField.class);
         assertEquals("zone 1", GuiActionRunner.execute(() -> field.getText()), "a default name is offered");
-        waitFor(() -> GuiActionRunner.execute(field::isFocusOwner), "the name field to have the focus");
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(field::isFocusOwner), "the name field to have the focus");
         GuiActionRunner.execute(field::selectAll);
         robot.enterText("nest");
         key(KeyEvent.VK_ENTER);
-        waitFor(() -> status().contains("already"), "the taken name to be explained");
+        EditorWindowFixture.waitFor(() -> status().contains("already"), "the taken name to be explained");
         assertTrue(status().contains("'nest'"), status());
         answerName("burrow");
-        waitFor(() -> project().site().zones().size() == 2, "the zone under its new name");
+        EditorWindowFixture.waitFor(() -> project().site().zones().size() == 2, "the zone under its new name");
         assertEquals("burrow", project().site().zones().get(1).name());
 
         // A line whose two clicks fall on one point: refused, said so, nothing added.
@@ -343,26 +308,26 @@ class SiteDrawingWindowTest {
         key(KeyEvent.VK_R);
         JDialog rename = waitForDialog();
         javax.swing.JTextField renameField = robot.finder().findByType(rename, javax.swing.JTextField.class);
-        waitFor(() -> GuiActionRunner.execute(renameField::isFocusOwner), "the name field to have the focus");
+        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(renameField::isFocusOwner), "the name field to have the focus");
         GuiActionRunner.execute(renameField::selectAll);
         robot.enterText("nest");
         key(KeyEvent.VK_ENTER);
-        waitFor(() -> status().contains("already"), "the taken name to be explained");
+        EditorWindowFixture.waitFor(() -> status().contains("already"), "the taken name to be explained");
         answerName("den");
-        waitFor(() -> project().site().zones().get(1).name().equals("den"), "the rename");
+        EditorWindowFixture.waitFor(() -> project().site().zones().get(1).name().equals("den"), "the rename");
         assertEquals("nest", project().site().zones().get(0).name(), "the other zone keeps its name");
         robot.pressKey(KeyEvent.VK_SHIFT);
         key(KeyEvent.VK_DELETE);
         robot.releaseKey(KeyEvent.VK_SHIFT);
-        waitFor(() -> project().site().zones().size() == 1, "the deletion");
+        EditorWindowFixture.waitFor(() -> project().site().zones().size() == 1, "the deletion");
         control(KeyEvent.VK_Z);
-        waitFor(() -> project().site().zones().size() == 2, "undo of the deletion");
+        EditorWindowFixture.waitFor(() -> project().site().zones().size() == 2, "undo of the deletion");
         // A zones file adds its zones and lines (the same name replaces); a broken one is refused with its line.
         Path zones = Files.writeString(dir.resolve("zones.json"), "{\"zones\": [{\"name\": \"nest\", \"polygon\": "
                 + "[[10, 10], [90, 10], [50, 80]]}],\n \"lines\": [{\"name\": \"gate\", \"from\": [0, 200], "
                 + "\"to\": [640, 200]}]}");
         GuiActionRunner.execute(() -> window.importZones(zones));
-        waitFor(() -> project().site().lines().size() == 1, "the import");
+        EditorWindowFixture.waitFor(() -> project().site().lines().size() == 1, "the import");
         assertEquals(List.of("nest", "den"), project().site().zones().stream().map(Zone::name).toList());
         assertEquals(3, project().site().zones().get(0).polygon().size(), "nest replaced by the file's");
         Path broken = Files.writeString(dir.resolve("broken.json"), "{\"zones\": [{\"name\": \"x\",\n \"polygon\": 3");

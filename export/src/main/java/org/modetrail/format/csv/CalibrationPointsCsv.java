@@ -85,15 +85,7 @@ public final class CalibrationPointsCsv {
 
     private static GroundPoint parse(Path file, int line, String text, Map<String, Integer> columns, double width,
                                      double height) throws CsvFormatException {
-        List<String> f;
-        try {
-            f = CsvLine.split(text);
-        } catch (IllegalArgumentException e) {
-            throw new CsvFormatException(file, line, e.getMessage());
-        }
-        if (f.size() != columns.size()) {
-            throw new CsvFormatException(file, line, "has " + f.size() + " fields, the header " + columns.size());
-        }
+        List<String> f = CsvLine.fields(file, line, text, columns);
         double u = CsvLine.number(file, line, f, columns, "image_x");
         double v = CsvLine.number(file, line, f, columns, "image_y");
         double x = CsvLine.number(file, line, f, columns, "world_x_m");

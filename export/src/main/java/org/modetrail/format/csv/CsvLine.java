@@ -87,6 +87,21 @@ final class CsvLine {
         return columns;
     }
 
+    /** The fields of row {@code line}, as many as the header's columns, or an error naming the line. */
+    static List<String> fields(Path file, int line, String text, Map<String, Integer> columns)
+            throws CsvFormatException {
+        List<String> f;
+        try {
+            f = split(text);
+        } catch (IllegalArgumentException e) {
+            throw new CsvFormatException(file, line, e.getMessage());
+        }
+        if (f.size() != columns.size()) {
+            throw new CsvFormatException(file, line, "has " + f.size() + " fields, the header " + columns.size());
+        }
+        return f;
+    }
+
     /** The number in column {@code name}: finite, with a dot for decimals whatever the locale. */
     static double number(Path file, int line, List<String> f, Map<String, Integer> c, String name)
             throws CsvFormatException {

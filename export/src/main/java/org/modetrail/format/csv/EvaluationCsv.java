@@ -77,15 +77,7 @@ public final class EvaluationCsv {
 
     private static LabelledBox parse(Path file, int line, String text, Map<String, Integer> columns)
             throws CsvFormatException {
-        List<String> f;
-        try {
-            f = CsvLine.split(text);
-        } catch (IllegalArgumentException e) {
-            throw new CsvFormatException(file, line, e.getMessage());
-        }
-        if (f.size() != columns.size()) {
-            throw new CsvFormatException(file, line, "has " + f.size() + " fields, the header " + columns.size());
-        }
+        List<String> f = CsvLine.fields(file, line, text, columns);
         int id = CsvLine.whole(file, line, f, columns, "track_id");
         int frame = CsvLine.whole(file, line, f, columns, "frame");
         double x = CsvLine.number(file, line, f, columns, "x");
