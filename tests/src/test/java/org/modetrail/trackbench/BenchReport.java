@@ -27,8 +27,7 @@ import org.modetrail.picture.Plots;
  *
  * <pre>
  * mvn -B -q install -DskipTests
- * mvn -B -q -pl tests test-compile exec:java -Dexec.mainClass=org.modetrail.trackbench.BenchReport \
- *     -Dexec.classpathScope=test -Dexec.args="--out bench-report [--quick]"
+ * mvn -B -q -pl tests verify -P bench-report -Dbench.out=$PWD/bench-report [-Dbench.mode=--quick]
  * </pre>
  */
 public final class BenchReport {
