@@ -34,6 +34,19 @@ final class FrameMatching {
         frames = all.stream().mapToInt(Integer::intValue).toArray();
     }
 
+    /** A (truth index, track index) pair as one key. */
+    static long pair(int truthIndex, int trackIndex) {
+        return ((long) truthIndex << 32) | (trackIndex & 0xFFFFFFFFL);
+    }
+
+    static int truthOf(long pair) {
+        return (int) (pair >>> 32);
+    }
+
+    static int trackOf(long pair) {
+        return (int) pair;
+    }
+
     /** IoU of each truth box (rows) with each track box (columns) of one frame. */
     static double[][] ious(List<LabelledBox> g, List<LabelledBox> t) {
         double[][] s = new double[g.size()][t.size()];

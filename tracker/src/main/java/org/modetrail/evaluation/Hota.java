@@ -1,6 +1,8 @@
 package org.modetrail.evaluation;
 
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * HOTA, from Luiten, Osep, Dendorfer, Torr, Geiger, Leal-Taixe and Leibe, "HOTA: a higher order metric for
@@ -33,7 +35,8 @@ public final class Hota {
         int nt = m.trackIds.length;
         double[] truthFrames = new double[ng];
         double[] trackFrames = new double[nt];
-        double[][] potential = new double[ng][nt];
+        // Per (truth, track) pair that ever overlap: sparse, as most pairs of a long video never meet.
+        Map<Long, double[]> potential = new HashMap<>();
         for (int f : m.frames) {
             List<LabelledBox> g = truth.onFrame(f);
             List<LabelledBox> t = tracks.onFrame(f);
@@ -58,25 +61,18 @@ public final class Hota {
             for (int i = 0; i < g.size(); i++) {
                 for (int j = 0; j < t.size(); j++) {
                     double denominator = rowSum[i] + colSum[j] - s[i][j];
-                    if (denominator > 1e-12) {
-                        potential[m.truthIndex.get(g.get(i).id())][m.trackIndex.get(t.get(j).id())]
-                                += s[i][j] / denominator;
+                    if (s[i][j] > 0 && denominator > 1e-12) {
+                        potential.computeIfAbsent(FrameMatching.pair(m.truthIndex.get(g.get(i).id()),
+                                m.trackIndex.get(t.get(j).id())), k -> new double[1])[0] += s[i][j] / denominator;
                     }
                 }
-            }
-        }
-        double[][] alignment = new double[ng][nt];
-        for (int i = 0; i < ng; i++) {
-            for (int j = 0; j < nt; j++) {
-                double d = truthFrames[i] + trackFrames[j] - potential[i][j];
-                alignment[i][j] = d > 0 ? potential[i][j] / d : 0;
             }
         }
         double[] tp = new double[ALPHAS];
         double[] fn = new double[ALPHAS];
         double[] fp = new double[ALPHAS];
         double[] loc = new double[ALPHAS];
-        double[][][] matched = new double[ALPHAS][ng][nt];
+        Map<Long, double[]> matched = new HashMap<>();
         for (int f : m.frames) {
             List<LabelledBox> g = truth.onFrame(f);
             List<LabelledBox> t = tracks.onFrame(f);
@@ -85,9 +81,14 @@ public final class Hota {
                 double[][] s = FrameMatching.ious(g, t);
                 double[][] score = new double[g.size()][t.size()];
                 for (int i = 0; i < g.size(); i++) {
+                    int gi = m.truthIndex.get(g.get(i).id());
                     for (int j = 0; j < t.size(); j++) {
-                        score[i][j] = alignment[m.truthIndex.get(g.get(i).id())][m.trackIndex.get(t.get(j).id())]
-                                * s[i][j];
+                        if (s[i][j] > 0) {
+                            int tj = m.trackIndex.get(t.get(j).id());
+                            double pm = potential.get(FrameMatching.pair(gi, tj))[0];
+                            double alignment = pm / (truthFrames[gi] + trackFrames[tj] - pm);
+                            score[i][j] = alignment * s[i][j];
+                        }
                     }
                 }
                 int[] pick = Assignment.maximumScore(score);
@@ -96,12 +97,15 @@ public final class Hota {
                     if (j < 0 || score[i][j] <= 0) {
                         continue;
                     }
-                    int gi = m.truthIndex.get(g.get(i).id());
-                    int tj = m.trackIndex.get(t.get(j).id());
+                    long key = FrameMatching.pair(m.truthIndex.get(g.get(i).id()), m.trackIndex.get(t.get(j).id()));
+                    double[] counts = null;
                     for (int a = 0; a < ALPHAS; a++) {
                         if (FrameMatching.matches(s[i][j], alpha(a))) {
+                            if (counts == null) {
+                                counts = matched.computeIfAbsent(key, k -> new double[ALPHAS]);
+                            }
                             here[a]++;
-                            matched[a][gi][tj]++;
+                            counts[a]++;
                             loc[a] += s[i][j];
                         }
                     }
@@ -118,20 +122,22 @@ public final class Hota {
         double[] assA = new double[ALPHAS];
         double[] locA = new double[ALPHAS];
         boolean nothing = truth.isEmpty() && tracks.isEmpty();
+        double[] sum = new double[ALPHAS];
+        for (Map.Entry<Long, double[]> e : matched.entrySet()) {
+            double gFrames = truthFrames[FrameMatching.truthOf(e.getKey())];
+            double tFrames = trackFrames[FrameMatching.trackOf(e.getKey())];
+            for (int a = 0; a < ALPHAS; a++) {
+                double c = e.getValue()[a];
+                if (c > 0) {
+                    // A(c) is the same for every true positive of the pair: c of them share it.
+                    sum[a] += c * c / (gFrames + tFrames - c);
+                }
+            }
+        }
         for (int a = 0; a < ALPHAS; a++) {
             double all = tp[a] + fn[a] + fp[a];
             detA[a] = all == 0 ? Double.NaN : tp[a] / all;
-            double sum = 0;
-            for (int i = 0; i < ng; i++) {
-                for (int j = 0; j < nt; j++) {
-                    double c = matched[a][i][j];
-                    if (c > 0) {
-                        // A(c) is the same for every true positive of the pair (i, j): c of them share it.
-                        sum += c * c / (truthFrames[i] + trackFrames[j] - c);
-                    }
-                }
-            }
-            assA[a] = tp[a] == 0 ? (nothing ? Double.NaN : 0) : sum / tp[a];
+            assA[a] = tp[a] == 0 ? (nothing ? Double.NaN : 0) : sum[a] / tp[a];
             hota[a] = Math.sqrt(detA[a] * assA[a]);
             locA[a] = tp[a] == 0 ? Double.NaN : loc[a] / tp[a];
         }

@@ -161,6 +161,79 @@ class MeasuresTest {
     }
 
     @Test
+    void idf1MatchesTheBestPairingByEnumerationOnRandomScenes() {
+        // The definition directly: IDTP is the most boxes any one-to-one pairing of trajectories and tracks shares.
+        java.util.Random r = new java.util.Random(17);
+        for (int trial = 0; trial < 100; trial++) {
+            int ng = 1 + r.nextInt(5);
+            int nt = 1 + r.nextInt(5);
+            List<LabelledBox> g = new ArrayList<>();
+            List<LabelledBox> t = new ArrayList<>();
+            for (int f = 0; f < 12; f++) {
+                for (int i = 0; i < ng; i++) {
+                    if (r.nextInt(4) > 0) {
+                        g.add(at(i + 1, f, new Box(30 * i + r.nextInt(3), 0, 20, 20)));
+                    }
+                }
+                for (int j = 0; j < nt; j++) {
+                    if (r.nextInt(4) > 0) {
+                        t.add(at(j + 1, f, new Box(30 * r.nextInt(ng) + r.nextInt(6), 0, 20, 20)));
+                    }
+                }
+            }
+            Annotations truth = Annotations.of(g);
+            Annotations tracks = Annotations.of(t);
+            int[][] shared = new int[ng + 1][nt + 1];
+            for (LabelledBox a : g) {
+                for (LabelledBox b : tracks.onFrame(a.frame())) {
+                    if (a.box().iou(b.box()) >= 0.5) {
+                        shared[a.id()][b.id()]++;
+                    }
+                }
+            }
+            int best = bestPairing(shared, 1, new boolean[nt + 1]);
+            assertEquals(best, IdentityMeasures.score(truth, tracks, 0.5).idTruePositives(), "trial " + trial);
+        }
+    }
+
+    private static int bestPairing(int[][] shared, int row, boolean[] used) {
+        if (row == shared.length) {
+            return 0;
+        }
+        int best = bestPairing(shared, row + 1, used);
+        for (int c = 1; c < used.length; c++) {
+            if (!used[c]) {
+                used[c] = true;
+                best = Math.max(best, shared[row][c] + bestPairing(shared, row + 1, used));
+                used[c] = false;
+            }
+        }
+        return best;
+    }
+
+    @Test
+    void thousandsOfObjectsOnAnHourLongVideoAreMeasuredWhole() {
+        // 3000 objects, each on screen for 30 frames, a few at a time, each followed exactly by a track of its own
+        // under another id: every measure is perfect (the sparse pairing keeps this small).
+        List<LabelledBox> g = new ArrayList<>();
+        List<LabelledBox> t = new ArrayList<>();
+        for (int k = 0; k < 3000; k++) {
+            for (int f = 10 * k; f < 10 * k + 30; f++) {
+                Box b = new Box(40 * (k % 3), 0, 30, 30);
+                g.add(at(k + 1, f, b));
+                t.add(at(k + 5001, f, b));
+            }
+        }
+        Annotations truth = Annotations.of(g);
+        Annotations tracks = Annotations.of(t);
+        assertEquals(1, IdentityMeasures.score(truth, tracks, 0.5).idf1(), 1e-12);
+        assertEquals(1, Hota.score(truth, tracks).hota(), 1e-12);
+        ClearMotScore c = ClearMot.score(truth, tracks, 0.5);
+        assertEquals(1, c.mota(), 1e-12);
+        assertEquals(3000, c.mostlyTracked());
+    }
+
+    @Test
     void idf1WithoutTracksIsZeroAndWithNothingUndefined() {
         assertEquals(0, IdentityMeasures.score(swapTruth(), Annotations.empty(), 0.5).idf1(), 1e-12);
         assertTrue(Double.isNaN(IdentityMeasures.score(Annotations.empty(), Annotations.empty(), 0.5).idf1()));
