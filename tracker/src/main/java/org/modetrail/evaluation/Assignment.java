@@ -121,6 +121,69 @@ public final class Assignment {
         return minimumCost(neg);
     }
 
+    /**
+     * The assignment of greatest total score where only positive scores count: rows and columns are split into the
+     * groups that positive scores connect, and each group is assigned on its own (a pair of score 0 or less adds
+     * nothing, so the total is the same as one assignment over all, at a fraction of the cost on a crowded frame
+     * where each box overlaps only its neighbours).
+     *
+     * @return for each row its column, or -1 where the row got none or only a pair of score 0 or less
+     */
+    public static int[] maximumPositiveScore(double[][] score) {
+        int rows = score.length;
+        int cols = rows == 0 ? 0 : score[0].length;
+        int[] parent = new int[rows + cols];
+        for (int i = 0; i < parent.length; i++) {
+            parent[i] = i;
+        }
+        for (int r = 0; r < rows; r++) {
+            for (int c = 0; c < cols; c++) {
+                if (score[r][c] > 0) {
+                    parent[root(parent, r)] = root(parent, rows + c);
+                }
+            }
+        }
+        int[] result = new int[rows];
+        Arrays.fill(result, -1);
+        java.util.Map<Integer, java.util.List<Integer>> groupRows = new java.util.HashMap<>();
+        java.util.Map<Integer, java.util.List<Integer>> groupCols = new java.util.HashMap<>();
+        for (int r = 0; r < rows; r++) {
+            groupRows.computeIfAbsent(root(parent, r), k -> new java.util.ArrayList<>()).add(r);
+        }
+        for (int c = 0; c < cols; c++) {
+            groupCols.computeIfAbsent(root(parent, rows + c), k -> new java.util.ArrayList<>()).add(c);
+        }
+        for (java.util.Map.Entry<Integer, java.util.List<Integer>> g : groupRows.entrySet()) {
+            java.util.List<Integer> cs = groupCols.get(g.getKey());
+            if (cs == null) {
+                continue; // a row with no positive score
+            }
+            java.util.List<Integer> rs = g.getValue();
+            double[][] sub = new double[rs.size()][cs.size()];
+            for (int i = 0; i < rs.size(); i++) {
+                for (int j = 0; j < cs.size(); j++) {
+                    sub[i][j] = score[rs.get(i)][cs.get(j)];
+                }
+            }
+            int[] pick = maximumScore(sub);
+            for (int i = 0; i < pick.length; i++) {
+                if (pick[i] >= 0 && sub[i][pick[i]] > 0) {
+                    result[rs.get(i)] = cs.get(pick[i]);
+                }
+            }
+        }
+        return result;
+    }
+
+    /** The root of {@code i} in a union-find forest, halving paths on the way. */
+    static int root(int[] parent, int i) {
+        while (parent[i] != i) {
+            parent[i] = parent[parent[i]];
+            i = parent[i];
+        }
+        return i;
+    }
+
     private static double[][] transpose(double[][] a) {
         double[][] t = new double[a[0].length][a.length];
         for (int r = 0; r < a.length; r++) {

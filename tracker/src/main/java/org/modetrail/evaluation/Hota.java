@@ -91,7 +91,7 @@ public final class Hota {
                         }
                     }
                 }
-                int[] pick = Assignment.maximumScore(score);
+                int[] pick = Assignment.maximumPositiveScore(score);
                 for (int i = 0; i < pick.length; i++) {
                     int j = pick[i];
                     if (j < 0 || score[i][j] <= 0) {

@@ -42,11 +42,12 @@ public final class IdentityMeasures {
             parent[i] = i;
         }
         for (long key : shared.keySet()) {
-            union(parent, FrameMatching.truthOf(key), ng + FrameMatching.trackOf(key));
+            parent[Assignment.root(parent, FrameMatching.truthOf(key))] = Assignment.root(parent,
+                    ng + FrameMatching.trackOf(key));
         }
         Map<Integer, List<Long>> groups = new HashMap<>();
         for (long key : shared.keySet()) {
-            groups.computeIfAbsent(find(parent, FrameMatching.truthOf(key)), k -> new ArrayList<>()).add(key);
+            groups.computeIfAbsent(Assignment.root(parent, FrameMatching.truthOf(key)), k -> new ArrayList<>()).add(key);
         }
         long idtp = 0;
         for (List<Long> edges : groups.values()) {
@@ -73,17 +74,5 @@ public final class IdentityMeasures {
         return new IdentityScore(gt + tr == 0 ? Double.NaN : 2.0 * tp / (gt + tr),
                 tr == 0 ? Double.NaN : (double) tp / tr, gt == 0 ? Double.NaN : (double) tp / gt,
                 tp, gt - tp, tr - tp);
-    }
-
-    private static int find(int[] parent, int i) {
-        while (parent[i] != i) {
-            parent[i] = parent[parent[i]];
-            i = parent[i];
-        }
-        return i;
-    }
-
-    private static void union(int[] parent, int a, int b) {
-        parent[find(parent, a)] = find(parent, b);
     }
 }

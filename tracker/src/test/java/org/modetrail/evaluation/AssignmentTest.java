@@ -69,6 +69,40 @@ class AssignmentTest {
     }
 
     @Test
+    void positiveScoresByGroupsGiveTheSameTotalAsOneAssignment() {
+        Random r = new Random(9);
+        for (int trial = 0; trial < 200; trial++) {
+            int rows = 1 + r.nextInt(7);
+            int cols = 1 + r.nextInt(7);
+            double[][] s = new double[rows][cols];
+            for (double[] row : s) {
+                for (int j = 0; j < cols; j++) {
+                    row[j] = r.nextInt(3) == 0 ? r.nextDouble() : 0; // sparse, as boxes overlap few others
+                }
+            }
+            double whole = 0;
+            int[] all = Assignment.maximumScore(s);
+            for (int i = 0; i < rows; i++) {
+                if (all[i] >= 0 && s[i][all[i]] > 0) {
+                    whole += s[i][all[i]];
+                }
+            }
+            double grouped = 0;
+            boolean[] taken = new boolean[cols];
+            int[] pick = Assignment.maximumPositiveScore(s);
+            for (int i = 0; i < rows; i++) {
+                if (pick[i] >= 0) {
+                    assertEquals(false, taken[pick[i]], "column given twice");
+                    taken[pick[i]] = true;
+                    assertEquals(true, s[i][pick[i]] > 0, "only positive pairs");
+                    grouped += s[i][pick[i]];
+                }
+            }
+            assertEquals(whole, grouped, 1e-9, "trial " + trial);
+        }
+    }
+
+    @Test
     void emptySidesAssignNothing() {
         assertArrayEquals(new int[0], Assignment.minimumCost(new double[0][0]));
         assertArrayEquals(new int[] {-1, -1}, Assignment.minimumCost(new double[2][0]));
