@@ -193,12 +193,7 @@ final class SitePainter {
     private void badge(Graphics2D g, String letter, double x, double y) {
         FontMetrics fm = g.getFontMetrics(small);
         double r = Math.max(fm.getAscent(), fm.stringWidth(letter)) / 2.0 + 3;
-        dot.setFrame(x - r, y - r, 2 * r, 2 * r);
-        g.setColor(LIGHT);
-        g.fill(dot);
-        g.setColor(HALO);
-        g.setStroke(thin);
-        g.draw(dot);
+        paintDot(g, x, y, r);
         g.setColor(DARK);
         g.setFont(small);
         g.drawString(letter, (float) (x - fm.stringWidth(letter) / 2.0), (float) (y + fm.getAscent() / 2.0 - 1));
