@@ -8,8 +8,9 @@ public class CsvFormatException extends IOException {
     private final Path file;
     private final int line;
 
+    /** {@code line} 0 for a problem with the whole file (missing, not text): the message then names no line. */
     public CsvFormatException(Path file, int line, String problem) {
-        super(file + ", line " + line + ": " + problem);
+        super(file + (line > 0 ? ", line " + line : "") + ": " + problem);
         this.file = file;
         this.line = line;
     }
@@ -18,7 +19,7 @@ public class CsvFormatException extends IOException {
         return file;
     }
 
-    /** 1-based line number. */
+    /** 1-based line number; 0 when the problem is with the whole file. */
     public int line() {
         return line;
     }
