@@ -1,8 +1,6 @@
 package org.modetrail.format.csv;
 
-import java.io.BufferedReader;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -41,51 +39,33 @@ public final class CalibrationPointsCsv {
         }
         List<GroundPoint> points = new ArrayList<>();
         List<Integer> lines = new ArrayList<>();
-        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            String header = in.readLine();
-            if (header == null || header.isBlank()) {
-                throw new CsvFormatException(file, 1, "the file is empty; it needs the header "
-                        + String.join(",", COLUMNS));
-            }
-            Map<String, Integer> columns = CsvLine.columns(file, header.replace("\uFEFF", ""), COLUMNS, List.of());
-            String text;
-            int line = 1;
-            while ((text = in.readLine()) != null) {
-                line++;
-                if (text.isBlank()) {
-                    continue;
+        int last = CsvLine.read(file, COLUMNS, List.of(), MAX_ROWS, "points", (line, f, columns) -> {
+            GroundPoint p = parse(file, line, f, columns, width, height);
+            for (int k = 0; k < points.size(); k++) {
+                GroundPoint q = points.get(k);
+                if (q.image().equals(p.image())) {
+                    throw new CsvFormatException(file, line, "the image point " + p.image().x() + ","
+                            + p.image().y() + " is already on line " + lines.get(k) + "; each point must be a"
+                            + " different place: remove one or correct it");
                 }
-                if (points.size() >= MAX_ROWS) {
-                    throw new CsvFormatException(file, line, "more than " + MAX_ROWS + " points");
+                if (q.world().equals(p.world())) {
+                    throw new CsvFormatException(file, line, "the ground point " + p.world().x() + ","
+                            + p.world().y() + " is already on line " + lines.get(k) + "; each point must be a"
+                            + " different place: remove one or correct it");
                 }
-                GroundPoint p = parse(file, line, text, columns, width, height);
-                for (int k = 0; k < points.size(); k++) {
-                    GroundPoint q = points.get(k);
-                    if (q.image().equals(p.image())) {
-                        throw new CsvFormatException(file, line, "the image point " + p.image().x() + ","
-                                + p.image().y() + " is already on line " + lines.get(k) + "; each point must be a"
-                                + " different place: remove one or correct it");
-                    }
-                    if (q.world().equals(p.world())) {
-                        throw new CsvFormatException(file, line, "the ground point " + p.world().x() + ","
-                                + p.world().y() + " is already on line " + lines.get(k) + "; each point must be a"
-                                + " different place: remove one or correct it");
-                    }
-                }
-                points.add(p);
-                lines.add(line);
             }
-            if (points.size() < 4) {
-                throw new CsvFormatException(file, line + 1, "only " + points.size() + " point(s); a ground"
-                        + " calibration needs at least 4 rows under the header, spread over the ground");
-            }
+            points.add(p);
+            lines.add(line);
+        });
+        if (points.size() < 4) {
+            throw new CsvFormatException(file, last + 1, "only " + points.size() + " point(s); a ground"
+                    + " calibration needs at least 4 rows under the header, spread over the ground");
         }
         return points;
     }
 
-    private static GroundPoint parse(Path file, int line, String text, Map<String, Integer> columns, double width,
+    private static GroundPoint parse(Path file, int line, List<String> f, Map<String, Integer> columns, double width,
                                      double height) throws CsvFormatException {
-        List<String> f = CsvLine.fields(file, line, text, columns);
         double u = CsvLine.number(file, line, f, columns, "image_x");
         double v = CsvLine.number(file, line, f, columns, "image_y");
         double x = CsvLine.number(file, line, f, columns, "world_x_m");

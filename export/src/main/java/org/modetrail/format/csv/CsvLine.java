@@ -87,6 +87,47 @@ final class CsvLine {
         return columns;
     }
 
+    /** Takes one data row of a file read by {@link #read}. */
+    interface RowReader {
+        void row(int line, List<String> fields, Map<String, Integer> columns) throws CsvFormatException;
+    }
+
+    /**
+     * Reads a CSV file: its header (by {@link #columns}), then every row that is not blank, split into as many
+     * fields as the header has columns and handed to {@code reader} with its line number; more than
+     * {@code maxRows} rows are refused as "more than N {@code what}". A file that is not UTF-8 is refused by name.
+     *
+     * @return the number of the file's last line
+     */
+    static int read(Path file, List<String> required, List<String> optional, int maxRows, String what,
+                     RowReader reader) throws java.io.IOException {
+        try (java.io.BufferedReader in = java.nio.file.Files.newBufferedReader(file,
+                java.nio.charset.StandardCharsets.UTF_8)) {
+            String header = in.readLine();
+            if (header == null || header.isBlank()) {
+                throw new CsvFormatException(file, 1, "the file is empty; it needs the header "
+                        + String.join(",", required));
+            }
+            Map<String, Integer> columns = columns(file, header.replace("\uFEFF", ""), required, optional);
+            String text;
+            int line = 1;
+            int rows = 0;
+            while ((text = in.readLine()) != null) {
+                line++;
+                if (text.isBlank()) {
+                    continue;
+                }
+                if (++rows > maxRows) {
+                    throw new CsvFormatException(file, line, "more than " + maxRows + " " + what);
+                }
+                reader.row(line, fields(file, line, text, columns), columns);
+            }
+            return line;
+        } catch (java.nio.charset.MalformedInputException e) {
+            throw new CsvFormatException(file, 0, "is not UTF-8 text; save it as UTF-8 CSV");
+        }
+    }
+
     /** The fields of row {@code line}, as many as the header's columns, or an error naming the line. */
     static List<String> fields(Path file, int line, String text, Map<String, Integer> columns)
             throws CsvFormatException {

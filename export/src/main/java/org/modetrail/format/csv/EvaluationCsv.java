@@ -1,8 +1,6 @@
 package org.modetrail.format.csv;
 
-import java.io.BufferedReader;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -44,40 +42,20 @@ public final class EvaluationCsv {
         }
         List<LabelledBox> boxes = new ArrayList<>();
         Map<Long, Integer> lineOf = new HashMap<>();
-        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            String header = in.readLine();
-            if (header == null || header.isBlank()) {
-                throw new CsvFormatException(file, 1, "the file is empty; it needs a header with at least "
-                        + String.join(",", REQUIRED));
+        CsvLine.read(file, REQUIRED, OPTIONAL, MAX_ROWS, "boxes", (line, f, columns) -> {
+            LabelledBox b = parse(file, line, f, columns);
+            Integer before = lineOf.put(((long) b.id() << 32) | b.frame(), line);
+            if (before != null) {
+                throw new CsvFormatException(file, line, "id " + b.id() + " already has a box on frame "
+                        + b.frame() + " (line " + before + "); keep one row per id and frame");
             }
-            Map<String, Integer> columns = CsvLine.columns(file, header.replace("\uFEFF", ""), REQUIRED, OPTIONAL);
-            String text;
-            int line = 1;
-            while ((text = in.readLine()) != null) {
-                line++;
-                if (text.isBlank()) {
-                    continue;
-                }
-                if (boxes.size() >= MAX_ROWS) {
-                    throw new CsvFormatException(file, line, "more than " + MAX_ROWS + " boxes");
-                }
-                LabelledBox b = parse(file, line, text, columns);
-                Integer before = lineOf.put(((long) b.id() << 32) | b.frame(), line);
-                if (before != null) {
-                    throw new CsvFormatException(file, line, "id " + b.id() + " already has a box on frame "
-                            + b.frame() + " (line " + before + "); keep one row per id and frame");
-                }
-                boxes.add(b);
-            }
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw new CsvFormatException(file, 0, "is not UTF-8 text; save it as UTF-8 CSV");
-        }
+            boxes.add(b);
+        });
         return Annotations.of(boxes);
     }
 
-    private static LabelledBox parse(Path file, int line, String text, Map<String, Integer> columns)
+    private static LabelledBox parse(Path file, int line, List<String> f, Map<String, Integer> columns)
             throws CsvFormatException {
-        List<String> f = CsvLine.fields(file, line, text, columns);
         int id = CsvLine.whole(file, line, f, columns, "track_id");
         int frame = CsvLine.whole(file, line, f, columns, "frame");
         double x = CsvLine.number(file, line, f, columns, "x");

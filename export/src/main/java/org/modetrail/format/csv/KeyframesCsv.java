@@ -1,8 +1,6 @@
 package org.modetrail.format.csv;
 
-import java.io.BufferedReader;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -38,43 +36,24 @@ public final class KeyframesCsv {
             throw new CsvFormatException(file, 0, "no such file; check the path given to --keyframes");
         }
         List<KeyframeRow> rows = new ArrayList<>();
-        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            String header = in.readLine();
-            if (header == null || header.isBlank()) {
-                throw new CsvFormatException(file, 1, "the file is empty; it needs the header "
-                        + String.join(",", REQUIRED));
+        Set<Long> seen = new HashSet<>();
+        CsvLine.read(file, REQUIRED, List.of("class"), MAX_ROWS, "keyframes", (line, f, columns) -> {
+            KeyframeRow row = parse(file, line, f, columns, width, height, frameCount);
+            long key = ((long) row.trackId() << 32) | row.frame();
+            if (!seen.add(key)) {
+                throw new CsvFormatException(file, line, "track " + row.trackId() + " already has a keyframe on"
+                        + " frame " + row.frame() + "; keep one row per track and frame");
             }
-            Map<String, Integer> columns = CsvLine.columns(file, header.replace("\uFEFF", ""), REQUIRED,
-                    List.of("class"));
-            Set<Long> seen = new HashSet<>();
-            String text;
-            int line = 1;
-            while ((text = in.readLine()) != null) {
-                line++;
-                if (text.isBlank()) {
-                    continue;
-                }
-                if (rows.size() >= MAX_ROWS) {
-                    throw new CsvFormatException(file, line, "more than " + MAX_ROWS + " keyframes");
-                }
-                KeyframeRow row = parse(file, line, text, columns, width, height, frameCount);
-                long key = ((long) row.trackId() << 32) | row.frame();
-                if (!seen.add(key)) {
-                    throw new CsvFormatException(file, line, "track " + row.trackId() + " already has a keyframe on"
-                            + " frame " + row.frame() + "; keep one row per track and frame");
-                }
-                rows.add(row);
-            }
-        }
+            rows.add(row);
+        });
         if (rows.isEmpty()) {
             throw new CsvFormatException(file, 2, "no keyframes: add at least one row under the header");
         }
         return rows;
     }
 
-    private static KeyframeRow parse(Path file, int line, String text, Map<String, Integer> columns, int width,
+    private static KeyframeRow parse(Path file, int line, List<String> f, Map<String, Integer> columns, int width,
                                      int height, int frameCount) throws CsvFormatException {
-        List<String> f = CsvLine.fields(file, line, text, columns);
         int trackId = CsvLine.whole(file, line, f, columns, "track_id");
         int frame = CsvLine.whole(file, line, f, columns, "frame");
         double x = CsvLine.number(file, line, f, columns, "x");
