@@ -76,7 +76,7 @@ class CalibrationDialogSwingTest {
             return d;
         });
         robot.waitForIdle();
-        ScreenWait.untilStill(dialog);
+        ScreenWait.untilStill(dialog, new java.awt.Point(20, 20));
     }
 
     @Test

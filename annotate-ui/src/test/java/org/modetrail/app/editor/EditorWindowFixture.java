@@ -46,7 +46,7 @@ final class EditorWindowFixture implements AutoCloseable {
             return w;
         });
         robot.waitForIdle();
-        ScreenWait.untilStill(window);
+        ScreenWait.untilStill(window, new java.awt.Point(0, 0));
         return new EditorWindowFixture(robot, window, node);
     }
 

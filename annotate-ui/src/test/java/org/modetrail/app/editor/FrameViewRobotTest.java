@@ -73,7 +73,7 @@ class FrameViewRobotTest {
             return v;
         });
         robot.waitForIdle();
-        ScreenWait.untilStill(view);
+        ScreenWait.untilStill(view, new Point(40, 40));
     }
 
     @AfterEach

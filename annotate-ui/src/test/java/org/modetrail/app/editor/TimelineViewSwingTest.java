@@ -72,7 +72,7 @@ class TimelineViewSwingTest {
         robot.waitForIdle();
         robot.delay(200);
         robot.waitForIdle();
-        ScreenWait.untilStill(frame);
+        ScreenWait.untilStill(frame, new java.awt.Point(600, 500));
     }
 
     @AfterEach
