@@ -156,8 +156,8 @@ final class ExportRunner implements AutoCloseable {
         } catch (ExportCancelledException | CancellationException e) {
             return ExportJobState.cancelled(file.getFileName() + " was not written"
                     + (Files.exists(file) ? " (the file there before is kept as it was)" : "")
-                    + (item == ExportItem.COCO && plan.cocoFrames() ? "; the frame images written so far stay in "
-                    + plan.framesFolder().orElseThrow().getFileName() : ""));
+                    + (item == ExportItem.COCO && plan.cocoFrames() ? "; the frame images it added to "
+                    + plan.framesFolder().orElseThrow().getFileName() + " were taken away again" : ""));
         } catch (VideoException e) {
             return ExportJobState.failed(e.getMessage() + " — the export reads the project's video; put it back "
                     + "where the project says, or reopen the project.");

@@ -49,8 +49,9 @@ import org.modetrail.video.VideoException;
  * <p>Ids of images, annotations and categories count from 1; tracks keep their Modetrail ids (1 or more), videos
  * have id 1. {@code frame_index} is the 0-based Modetrail frame. Boxes are clipped to the frame; a box wholly
  * outside is left out. Coordinates are rounded to a thousandth of a pixel. Hidden and absent marks are not written
- * (COCO has boxes only). The JSON file is replaced atomically, each PNG file too; when the export is cancelled the
- * JSON file is not touched (frame images already written stay, complete).
+ * (COCO has boxes only). The JSON file is replaced atomically, each PNG file too; when the export is cancelled or
+ * fails the JSON file is not touched, and the frame images this run added are deleted (those that replaced an
+ * earlier export's stay, each complete).
  */
 public final class CocoWriter {
     public static final String SOURCE_KEY = "modetrail_source";
@@ -115,12 +116,24 @@ public final class CocoWriter {
             if (!progress.update(0, total)) {
                 throw new ExportCancelledException(out);
             }
-            for (int frame : byFrame.keySet()) {
-                writeFrameImage(images, frame, video);
-                imageFiles++;
-                if (!progress.update(imageFiles, total)) {
-                    throw new ExportCancelledException(out);
+            boolean folderIsNew = !Files.exists(images.folder());
+            List<Path> created = new ArrayList<>();
+            try {
+                for (int frame : byFrame.keySet()) {
+                    Path file = images.imageFile(frame);
+                    boolean isNew = !Files.exists(file);
+                    writeFrameImage(images, frame, video);
+                    if (isNew) {
+                        created.add(file);
+                    }
+                    imageFiles++;
+                    if (!progress.update(imageFiles, total)) {
+                        throw new ExportCancelledException(out);
+                    }
                 }
+            } catch (IOException | RuntimeException e) {
+                removeUnfinished(created, folderIsNew ? images.folder() : null);
+                throw e;
             }
         }
         String videoName = videoFileName(video);
@@ -268,6 +281,29 @@ public final class CocoWriter {
         String p = video.path().replace('\\', '/');
         int slash = p.lastIndexOf('/');
         return slash < 0 ? p : p.substring(slash + 1);
+    }
+
+    /**
+     * After a cancelled or failed run: deletes the frame images this run added, and the folder when this run made it
+     * and it is left empty. Images that replaced an earlier export's stay (each is complete).
+     */
+    private static void removeUnfinished(List<Path> created, Path newFolder) {
+        for (Path file : created) {
+            try {
+                Files.deleteIfExists(file);
+            } catch (IOException ignored) {
+                // best effort: a left file is a complete image, nothing the user made is lost
+            }
+        }
+        if (newFolder != null) {
+            try (var left = Files.list(newFolder)) {
+                if (left.findAny().isEmpty()) {
+                    Files.delete(newFolder);
+                }
+            } catch (IOException ignored) {
+                // best effort, as above
+            }
+        }
     }
 
     private static void writeFrameImage(CocoFrameImages images, int frame, VideoRef video) throws IOException {

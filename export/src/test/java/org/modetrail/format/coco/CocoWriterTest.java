@@ -217,8 +217,30 @@ class CocoWriterTest {
             assertThrows(ExportCancelledException.class, () -> CocoWriter.write(p, video.index()::timeSeconds, out,
                     new CocoFrameImages(video, dir.resolve("frames")), stopAfterOne));
             assertEquals("the user's earlier export", Files.readString(out));
-            assertTrue(Files.exists(dir.resolve("frames").resolve(CocoWriter.frameFileName(0))));
-            assertFalse(Files.exists(dir.resolve("frames").resolve(CocoWriter.frameFileName(1))));
+            // The image written before the cancel is taken away again, and the folder the run made with it.
+            assertFalse(Files.exists(dir.resolve("frames")));
+        }
+    }
+
+    @Test
+    void cancellingKeepsImagesAnEarlierExportWroteAndTheUsersOwnFiles() throws Exception {
+        try (VideoSource video = VideoSource.open(ARENA)) {
+            Project p = onArena(video, 0, 1, 2);
+            Path out = dir.resolve("arena.json");
+            Path frames = dir.resolve("frames");
+            assertThrows(ExportCancelledException.class, () -> CocoWriter.write(p, video.index()::timeSeconds, out,
+                    new CocoFrameImages(video, frames), (done, total) -> done < 1)); // cancelled: nothing stays
+            assertFalse(Files.exists(frames));
+            Files.createDirectories(frames);
+            Files.writeString(frames.resolve("notes.txt"), "the user's own file");
+            Path earlier = frames.resolve(CocoWriter.frameFileName(0));
+            Files.writeString(earlier, "an earlier export's image");
+            ExportProgress stopAfterTwo = (done, total) -> done < 2;
+            assertThrows(ExportCancelledException.class, () -> CocoWriter.write(p, video.index()::timeSeconds, out,
+                    new CocoFrameImages(video, frames), stopAfterTwo));
+            assertTrue(Files.size(earlier) > 1000, "frame 0 was replaced by a whole PNG and kept");
+            assertFalse(Files.exists(frames.resolve(CocoWriter.frameFileName(1))), "frame 1 was new: deleted");
+            assertEquals("the user's own file", Files.readString(frames.resolve("notes.txt")));
         }
     }
 }
