@@ -159,6 +159,13 @@ class FrameViewRobotTest {
         robot.moveMouse(view, p);
         robot.rotateMouseWheel(-2); // two notches towards the user's screen: in
         robot.waitForIdle();
+        if (transform().equals(before)) {
+            // Under Xvfb the first wheel notches can be lost before the pointer's move is heard: turn again.
+            robot.moveMouse(view, p);
+            robot.waitForIdle();
+            robot.rotateMouseWheel(-2);
+            robot.waitForIdle();
+        }
         ViewTransform after = transform();
         assertTrue(after.scale() > before.scale() * 1.1, before + " then " + after);
         assertEquals(p.x, after.toViewX(ix), 1e-6);
