@@ -53,7 +53,7 @@ final class Pass {
             return; // the start frame was unreadable: nothing to track from
         }
         TrackStep step = tracker.track(frame);
-        if (step.status() == TrackStatus.TRACKED) {
+        if (step.status().found()) {
             result.put(n, step.box(), step.similarity());
         }
         if (step.status() == TrackStatus.LOST || n == stop) {

@@ -61,7 +61,15 @@ public final class MeanShiftTracker implements Tracker {
     private final KernelHistogram observed;
     private final IlluminationCompensation light;
     private final PartialOcclusion occlusion;
+    private final CentreSurroundScale surround;
+    private double coreW = 1;
+    private double coreH = 1;
+    private double startAspect;
     private Box box;
+    /** The box of the last frame the object was found on. */
+    private Box lastFound;
+    private final ReDetection redetection = new ReDetection();
+    private boolean searching;
     private double startArea;
     /** Running mean of the similarity of accepted frames: what "normal" looks like for this object now. */
     private double typicalSimilarity;
@@ -92,6 +100,7 @@ public final class MeanShiftTracker implements Tracker {
         observed = new KernelHistogram(bins);
         light = config.compensateLighting() ? new IlluminationCompensation() : null;
         occlusion = new PartialOcclusion(bins);
+        surround = new CentreSurroundScale(0.3, 0.1);
     }
 
     public TrackerConfig config() {
@@ -116,9 +125,18 @@ public final class MeanShiftTracker implements Tracker {
         occlusion.build(image, start);
         likelihood.update(model.target, model.background.values);
         moments.reset(image, likelihood, start);
+        if (config.scale() == ScaleMethod.CENTRE_SURROUND || config.scale() == ScaleMethod.MOMENTS) {
+            load(frame, start, 1.3 * CentreSurroundScale.SURROUND / 2 + 0.05, 2);
+            surround.calibrate(image, likelihood, start);
+            coreW = surround.coreWidth;
+            coreH = surround.coreHeight;
+        }
         kalman.reset(start.centreX(), start.centreY());
         box = start;
+        lastFound = start;
+        searching = false;
         startArea = start.area();
+        startAspect = start.width() / start.height();
         typicalSimilarity = 1;
         coasting = 0;
         tracked = 0;
@@ -143,6 +161,9 @@ public final class MeanShiftTracker implements Tracker {
                     : "start the tracker on a box first");
         }
         image.invalidate();
+        if (searching) {
+            return search(frame, claimed);
+        }
         if (light != null) {
             light.update(frame, box);
         }
@@ -185,7 +206,7 @@ public final class MeanShiftTracker implements Tracker {
 
         if (bestRho >= acceptThreshold()) {
             typicalSimilarity += TYPICAL_RATE * (bestRho - typicalSimilarity);
-            Box sized = adaptScale(best, bestRho);
+            Box sized = adaptScale(frame, best, bestRho);
             // The halves are judged only when it matters: the box would shrink, or a hold may end.
             if (holding || sized.width() < best.width() || sized.height() < best.height()) {
                 updateHolding(best, bestRho);
@@ -197,9 +218,10 @@ public final class MeanShiftTracker implements Tracker {
             kalman.correct(best.centreX(), best.centreY());
             learn(frame, best);
             box = best;
+            lastFound = best;
             coasting = 0;
             tracked++;
-            return new TrackStep(frame.index(), best, bestRho, TrackStatus.TRACKED);
+            return new TrackStep(frame.index(), inFrame(best, frame), bestRho, TrackStatus.TRACKED);
         }
         coasting++;
         if (!holding) {
@@ -208,11 +230,53 @@ public final class MeanShiftTracker implements Tracker {
         }
         heldFrames = 0;
         box = predicted;
-        if (coasting > config.maxCoastFrames()) {
-            lost = true;
-            return new TrackStep(frame.index(), predicted, bestRho, TrackStatus.LOST);
+        boolean leftTheFrame = predicted.intersection(new Box(0, 0, frame.width(), frame.height()))
+                < 0.5 * predicted.area();
+        if (coasting > config.maxCoastFrames() || leftTheFrame) {
+            if (!config.reDetect()) {
+                lost = true;
+                return new TrackStep(frame.index(), predicted, bestRho, TrackStatus.LOST);
+            }
+            searching = true;
+            redetection.begin(lastFound, kalman.vx(), kalman.vy());
+            return new TrackStep(frame.index(), lastFound, bestRho, TrackStatus.SEARCHING);
         }
         return new TrackStep(frame.index(), predicted, bestRho, TrackStatus.COASTING);
+    }
+
+    /** One frame of the search for a lost object ({@link ReDetection}); the object comes back re-acquired. */
+    private TrackStep search(Frame frame, List<Box> claimed) {
+        double required = Math.max(acceptThreshold(), typicalSimilarity - ReDetection.MARGIN);
+        if (redetection.step(frame, image, likelihood, search, localizer, model, required, config.searchRadius(),
+                claimed, light)) {
+            Box at = redetection.found;
+            searching = false;
+            coasting = 0;
+            holding = false;
+            heldFrames = 0;
+            kalman.reset(at.centreX(), at.centreY());
+            box = at;
+            lastFound = at;
+            return new TrackStep(frame.index(), inFrame(at, frame), redetection.foundSimilarity,
+                    TrackStatus.REACQUIRED);
+        }
+        if (config.maxSearchFrames() > 0 && redetection.framesLost() > config.maxSearchFrames()) {
+            lost = true;
+            return new TrackStep(frame.index(), lastFound, redetection.foundSimilarity, TrackStatus.LOST);
+        }
+        return new TrackStep(frame.index(), lastFound, redetection.foundSimilarity, TrackStatus.SEARCHING);
+    }
+
+    /** The part of {@code b} inside the frame (the box itself when wholly inside or wholly out). */
+    private static Box inFrame(Box b, Frame frame) {
+        double x0 = Math.max(0, b.x());
+        double y0 = Math.max(0, b.y());
+        double x1 = Math.min(frame.width(), b.right());
+        double y1 = Math.min(frame.height(), b.bottom());
+        if (x1 - x0 < 1 || y1 - y0 < 1 || x0 == b.x() && y0 == b.y() && x1 == b.right() && y1 == b.bottom()) {
+            return b;
+        }
+        return new Box(x0, y0, x1 - x0, y1 - y0);
     }
 
     /**
@@ -257,24 +321,39 @@ public final class MeanShiftTracker implements Tracker {
                 Math.max(sized.height(), held.height()));
     }
 
-    private Box adaptScale(Box located, double rho) {
+    private Box adaptScale(Frame frame, Box located, double rho) {
         switch (config.scale()) {
             case TEN_PERCENT:
                 return TenPercentScaleEstimator.adapt(localizer, image, located, located, rho, model.weighted,
                         model.target.values);
             case MOMENTS:
-                return validatedMomentSize(located, rho);
+                return validatedMomentSize(frame, located, rho);
+            case CENTRE_SURROUND:
+                return centreSurroundSize(frame, located);
             default:
                 return located;
         }
     }
 
+    /** The centre-surround size, kept within the area bounds of the start box. */
+    private Box centreSurroundSize(Frame frame, Box located) {
+        double reach = 1.1 * CentreSurroundScale.SURROUND / 2 + 0.05;
+        load(frame, located, reach, 2);
+        Box proposed = surround.adapt(image, likelihood, located, startAspect);
+        double grow = proposed.area() / startArea;
+        if (grow < MIN_AREA_RATIO || grow > MAX_AREA_RATIO) {
+            return located;
+        }
+        return proposed;
+    }
+
     /**
      * The moment estimate proposes a size; it is taken only if the target candidate at that size is at least as
      * similar to the model as at the old size (less a small tolerance), so clutter of the target's colours next to
-     * it cannot inflate the box step by step. A departure from SOAMST, which takes the moment size as it is.
+     * it cannot inflate the box step by step, and if the centre-surround response does not fall. A departure from
+     * SOAMST, which takes the moment size as it is.
      */
-    private Box validatedMomentSize(Box located, double rho) {
+    private Box validatedMomentSize(Frame frame, Box located, double rho) {
         Box proposed = moments.adapt(image, likelihood, located);
         if (proposed == located) {
             return located;
@@ -284,7 +363,21 @@ public final class MeanShiftTracker implements Tracker {
             return located;
         }
         observed.compute(image, proposed);
-        return observed.bhattacharyya(model.target.values) >= rho - SIZE_TOLERANCE ? proposed : located;
+        if (observed.bhattacharyya(model.target.values) < rho - SIZE_TOLERANCE) {
+            return located;
+        }
+        // And only if the centre-surround response of the likelihood (CentreSurroundScale) does not fall: a box
+        // that widens over a look-alike neighbour keeps its colours, but its surround loses the contrast.
+        load(frame, located, Math.max(proposed.width() / located.width(), proposed.height() / located.height())
+                * CentreSurroundScale.SURROUND / 2 + 0.05, 2);
+        double before = surround.respondAt(image, likelihood, located.centreX(), located.centreY(),
+                located.width() * coreW, located.height() * coreH);
+        double after = surround.respondAt(image, likelihood, proposed.centreX(), proposed.centreY(),
+                proposed.width() * coreW, proposed.height() * coreH);
+        if (after < before) {
+            return located;
+        }
+        return proposed;
     }
 
     /**
@@ -350,5 +443,10 @@ public final class MeanShiftTracker implements Tracker {
 
     public boolean isLost() {
         return lost;
+    }
+
+    /** Whether the object is lost from view and being looked for. */
+    public boolean isSearching() {
+        return searching;
     }
 }

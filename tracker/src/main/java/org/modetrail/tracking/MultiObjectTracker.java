@@ -51,7 +51,7 @@ public final class MultiObjectTracker {
                 continue;
             }
             TrackStep s = t.track(frame, claimed);
-            if (s.status() == TrackStatus.TRACKED) {
+            if (s.status().found()) {
                 claimed.add(s.box());
             }
             out[i] = s;
@@ -65,7 +65,7 @@ public final class MultiObjectTracker {
 
     private double confidence(int i) {
         TrackStep s = last.get(i);
-        return s.status() == TrackStatus.TRACKED ? s.similarity() : -1;
+        return s.status().found() ? s.similarity() : -1;
     }
 
     public int size() {

@@ -10,5 +10,10 @@ public enum ScaleMethod {
      */
     TEN_PERCENT,
     /** Width and height from the second moments of the colour-likelihood map ({@link MomentScaleEstimator}). */
-    MOMENTS
+    MOMENTS,
+    /**
+     * Width and height by a local search for the strongest centre-surround response of the colour-likelihood map
+     * ({@link CentreSurroundScale}, after Collins 2003).
+     */
+    CENTRE_SURROUND
 }

@@ -32,15 +32,20 @@ package org.modetrail.tracking;
  * @param measurementNoise     Kalman measurement variance (pixels squared); default 4
  * @param compensateLighting   undo global lighting changes before binning ({@link IlluminationCompensation});
  *                             default on
+ * @param reDetect             when the object is lost or leaves the frame, look for it again ({@link ReDetection})
+ *                             instead of ending the track; default on
+ * @param maxSearchFrames      frames the search goes on before the track ends, 0 for as long as there are frames;
+ *                             default 0
  */
 public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, ScaleMethod scale,
                             int maxIterations, double convergencePx, double lostSimilarity,
                             double confidentSimilarity, int maxCoastFrames, double searchRadius,
                             double motionPenalty, double modelUpdateRate, double modelUpdateMinSimilarity,
                             double backgroundRefresh, double processNoise, double measurementNoise,
-                            boolean compensateLighting) {
+                            boolean compensateLighting, boolean reDetect, int maxSearchFrames) {
 
     public TrackerConfig {
+        check(maxSearchFrames >= 0, "maxSearchFrames must not be negative, got " + maxSearchFrames);
         if (binning == null || scale == null) {
             throw new IllegalArgumentException("binning and scale method are required");
         }
@@ -123,6 +128,8 @@ public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, 
         private double processNoise = 4;
         private double measurementNoise = 4;
         private boolean compensateLighting = true;
+        private boolean reDetect = true;
+        private int maxSearchFrames = 0;
 
         public Builder() {
         }
@@ -144,6 +151,8 @@ public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, 
             processNoise = c.processNoise;
             measurementNoise = c.measurementNoise;
             compensateLighting = c.compensateLighting;
+            reDetect = c.reDetect;
+            maxSearchFrames = c.maxSearchFrames;
         }
 
         public Builder binning(ColourBinning v) {
@@ -222,11 +231,21 @@ public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, 
             return this;
         }
 
+        public Builder reDetect(boolean v) {
+            reDetect = v;
+            return this;
+        }
+
+        public Builder maxSearchFrames(int v) {
+            maxSearchFrames = v;
+            return this;
+        }
+
         public TrackerConfig build() {
             return new TrackerConfig(binning, backgroundWeighting, scale, maxIterations, convergencePx,
                     lostSimilarity, confidentSimilarity, maxCoastFrames, searchRadius, motionPenalty,
                     modelUpdateRate, modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise,
-                    compensateLighting);
+                    compensateLighting, reDetect, maxSearchFrames);
         }
     }
 }
