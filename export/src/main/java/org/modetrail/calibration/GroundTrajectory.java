@@ -159,15 +159,17 @@ public final class GroundTrajectory {
             double j12 = (h[1] - px * h[7]) / w;
             double j21 = (h[3] - py * h[6]) / w;
             double j22 = (h[4] - py * h[7]) / w;
+            // The calibration's error and the box's own (its edges, so the contact point's) are independent.
+            double imageSigma = a.hasUncertainty() ? Math.hypot(pixelSigma, a.uncertaintyPx()) : pixelSigma;
             frame[n] = a.frame();
             t[n] = time;
             x[n] = px;
             y[n] = py;
-            sigma[n] = pixelSigma * Math.sqrt((j11 * j11 + j12 * j12 + j21 * j21 + j22 * j22) / 2);
-            j11s[n] = pixelSigma * j11;
-            j12s[n] = pixelSigma * j12;
-            j21s[n] = pixelSigma * j21;
-            j22s[n] = pixelSigma * j22;
+            sigma[n] = imageSigma * Math.sqrt((j11 * j11 + j12 * j12 + j21 * j21 + j22 * j22) / 2);
+            j11s[n] = imageSigma * j11;
+            j12s[n] = imageSigma * j12;
+            j21s[n] = imageSigma * j21;
+            j22s[n] = imageSigma * j22;
             n++;
         }
 
