@@ -18,6 +18,10 @@ import org.modetrail.calibration.GroundSample;
 import org.modetrail.calibration.GroundTrajectory;
 import org.modetrail.calibration.TrajectoryConfig;
 import org.modetrail.format.project.ProjectFile;
+import org.modetrail.summary.GroundPaths;
+import org.modetrail.summary.TrackSummaries;
+import org.modetrail.summary.TrackSummary;
+import org.modetrail.model.BoxSource;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.Project;
 import org.modetrail.model.Track;
@@ -83,11 +87,12 @@ class RoadSpeedCoverageTest {
     record Coverage(int frames, double share, double medianSigma, double medianAbsError) {
     }
 
-    static Coverage coverage(Project p) {
-        int n = 0;
-        int inside = 0;
-        List<Double> sigmas = new ArrayList<>();
-        List<Double> errors = new ArrayList<>();
+    /** Per counted frame: |error|, stated sigma, and whether the frame may stand as a peak (TrackSummaries). */
+    record Frame(int track, double error, double sigma, boolean peakWorthy) {
+    }
+
+    static List<Frame> frames(Project p) {
+        List<Frame> out = new ArrayList<>();
         for (Track t : p.tracks()) {
             TreeMap<Integer, double[]> truthOf = truth.get(t.id());
             for (GroundSample s : GroundTrajectory.of(p, t, GroundTrajectory.constantRate(25),
@@ -96,16 +101,26 @@ class RoadSpeedCoverageTest {
                 if (!s.hasSpeed() || tr == null || tr[0] < NEAR_Y_M || tr[0] > FAR_Y_M) {
                     continue;
                 }
-                n++;
-                double err = Math.abs(s.speedMs() - tr[1]);
-                if (err <= K95 * s.speedSigmaMs()) {
-                    inside++;
-                }
-                sigmas.add(s.speedSigmaMs());
-                errors.add(err);
+                boolean interpolated = t.frames().get(s.frame()).source() == BoxSource.INTERPOLATED;
+                out.add(new Frame(t.id(), Math.abs(s.speedMs() - tr[1]), s.speedSigmaMs(), !interpolated
+                        && !(s.speedSigmaMs() > TrackSummaries.PEAK_MAX_RELATIVE_SIGMA * s.speedMs())));
             }
         }
-        return new Coverage(n, (double) inside / n, median(sigmas), median(errors));
+        return out;
+    }
+
+    static Coverage coverage(List<Frame> frames) {
+        int inside = 0;
+        List<Double> sigmas = new ArrayList<>();
+        List<Double> errors = new ArrayList<>();
+        for (Frame f : frames) {
+            if (f.error() <= K95 * f.sigma()) {
+                inside++;
+            }
+            sigmas.add(f.sigma());
+            errors.add(f.error());
+        }
+        return new Coverage(frames.size(), (double) inside / frames.size(), median(sigmas), median(errors));
     }
 
     private static double median(List<Double> v) {
@@ -127,77 +142,44 @@ class RoadSpeedCoverageTest {
     }
 
     @Test
-    void diagnostics() {
-        for (Track t : tracked.tracks()) {
-            TreeMap<Integer, double[]> truthOf = truth.get(t.id());
-            List<Double> u = new ArrayList<>();
-            List<Double> sc = new ArrayList<>();
-            for (FrameAnnotation a : t.frames().values()) {
-                if (a.isVisible() && !a.isKeyframe()) {
-                    u.add(a.uncertaintyPx());
-                    sc.add(a.score());
-                }
-            }
-            int n = 0;
-            int in = 0;
-            int inOld = 0;
-            List<Double> sig = new ArrayList<>();
-            List<Double> err = new ArrayList<>();
-            List<GroundSample> old = GroundTrajectory.of(withoutTrackingUncertainty(tracked), 
-                    withoutTrackingUncertainty(tracked).track(t.id()).orElseThrow(), GroundTrajectory.constantRate(25),
-                    TrajectoryConfig.defaults());
-            int k = 0;
-            for (GroundSample s : GroundTrajectory.of(tracked, t, GroundTrajectory.constantRate(25),
-                    TrajectoryConfig.defaults())) {
-                GroundSample o = old.get(k++);
-                double[] tr = truthOf.get(s.frame());
-                if (!s.hasSpeed() || tr == null || tr[0] < NEAR_Y_M || tr[0] > FAR_Y_M) {
-                    continue;
-                }
-                n++;
-                double e = Math.abs(s.speedMs() - tr[1]);
-                in += e <= K95 * s.speedSigmaMs() ? 1 : 0;
-                inOld += Math.abs(o.speedMs() - tr[1]) <= K95 * o.speedSigmaMs() ? 1 : 0;
-                sig.add(s.speedSigmaMs());
-                err.add(e);
-            }
-            System.out.printf("track %d %s: %d boxes (first %d last %d), median u %.2f px, median score %.3f;"
-                    + " %d speeds, inside %d (old %d), median sigma %.2f, median |err| %.2f%n", t.id(), t.className(),
-                    t.frames().size(), t.frames().isEmpty() ? -1 : t.frames().keySet().iterator().next(),
-                    t.frames().isEmpty() ? -1 : ((java.util.TreeMap<Integer, FrameAnnotation>) new TreeMap<>(t.frames())).lastKey(),
-                    median(u), median(sc), n, in, inOld, median(sig), median(err));
-        }
-    }
-
-    @Test
-    void dump() throws Exception {
-        java.util.Map<String, String> tb = new java.util.HashMap<>();
-        List<String> lines = Files.readAllLines(RoadFixture.TRUTH);
-        for (String line : lines.subList(1, lines.size())) {
-            String[] f = line.split(",");
-            tb.put(f[0] + ":" + f[2], f[4] + "," + f[5] + "," + f[6] + "," + f[7]);
-        }
-        for (int id : new int[] {3, 8}) {
-            for (FrameAnnotation a : tracked.track(id).orElseThrow().frames().values()) {
-                if (a.frame() % 5 != 0 && id == 3) continue;
-                System.out.printf("T%d f%d %s %s score %.3f u %.2f truth %s%n", id, a.frame(), a.source(),
-                        a.box(), a.score(), a.uncertaintyPx(), tb.get(id + ":" + a.frame()));
-            }
-        }
-    }
-
-    @Test
     void statedIntervalsContainTheTrueSpeed() {
-        Coverage now = coverage(tracked);
-        Coverage old = coverage(withoutTrackingUncertainty(tracked));
-        System.out.printf("road, tracked from one keyframe per road user: %d frames with a speed in the stretch%n",
-                now.frames());
+        List<Frame> now = frames(tracked);
+        Coverage all = coverage(now);
+        Coverage old = coverage(frames(withoutTrackingUncertainty(tracked)));
+        Coverage trusted = coverage(now.stream().filter(Frame::peakWorthy).toList());
+        System.out.printf("road, tracked from one keyframe per road user: %d frames with a speed in the stretch,"
+                + " median |error| %.2f m/s%n", all.frames(), all.medianAbsError());
         System.out.printf("  old sigmas: %.1f %% inside the 95%% interval, median sigma %.2f m/s%n",
                 100 * old.share(), old.medianSigma());
         System.out.printf("  new sigmas: %.1f %% inside the 95%% interval, median sigma %.2f m/s%n",
-                100 * now.share(), now.medianSigma());
-        System.out.printf("  median |error| %.2f m/s%n", now.medianAbsError());
-        assertTrue(now.frames() > 500, now.frames() + " frames");
-        assertTrue(now.share() >= old.share(), "the tracking's share never makes coverage worse");
+                100 * all.share(), all.medianSigma());
+        System.out.printf("  frames a peak may use (%d): %.1f %% inside, median sigma %.2f m/s, median |error| %.2f"
+                + " m/s%n", trusted.frames(), 100 * trusted.share(), trusted.medianSigma(), trusted.medianAbsError());
+        for (Track t : tracked.tracks()) {
+            List<Frame> mine = now.stream().filter(f -> f.track() == t.id()).toList();
+            if (!mine.isEmpty()) {
+                Coverage c = coverage(mine);
+                System.out.printf("  track %d %s: %d frames, %.1f %% inside, median sigma %.2f m/s, median |error|"
+                        + " %.2f m/s%n", t.id(), t.className(), c.frames(), 100 * c.share(), c.medianSigma(),
+                        c.medianAbsError());
+            }
+        }
+        double[] times = new double[tracked.video().frameCount()];
+        for (int i = 0; i < times.length; i++) {
+            times[i] = i / 25.0;
+        }
+        for (TrackSummary s : TrackSummaries.of(tracked, times, GroundPaths.of(tracked, times))) {
+            double trueTop = truth.get(s.trackId()).values().stream().mapToDouble(v -> v[1]).max().orElse(Double.NaN);
+            System.out.printf("  track %d: peak %.2f ± %.2f m/s (%d frames left out), true top speed %.2f m/s%n",
+                    s.trackId(), s.peakSpeedMs(), s.peakSpeedSigmaMs(), s.peakLeftOut(), trueTop);
+        }
+        assertTrue(all.frames() > 500, all.frames() + " frames");
+        // Measured 91.8 % (old sigmas 28.6 %) with a median sigma of 3.54 m/s on speeds of 6 to 17 m/s: the tracker
+        // is far off on this clip (median error 1.65 m/s, several m/s on the vehicles whose boxes keep their size
+        // as they recede), and the intervals say so. The target of issue 12 is 90 %.
+        assertTrue(all.share() >= 0.90, "coverage " + all.share());
+        assertTrue(old.share() < 0.5, "the old sigmas were far too small: " + old.share());
+        // Not by making every interval huge: half the frames are stated to within 4 m/s.
+        assertTrue(all.medianSigma() < 4, "median sigma " + all.medianSigma());
     }
 }
