@@ -14,10 +14,12 @@ import org.modetrail.model.WorldPoint;
  * @param headingDeg     direction of motion in degrees in [0, 360): 0 along +x of the ground frame, 90 along +y
  *                       (counter-clockwise seen from above, when +y is 90 degrees counter-clockwise of +x); NaN where the
  *                       speed is NaN or 0. Meaningless when the speed is within a few {@code speedSigmaMs} of 0.
- * @param positionSigmaM standard deviation per axis of {@code raw}, metres: the calibration's RMS image error
- *                       carried through the homography's local Jacobian (see {@link GroundTrajectory})
- * @param speedSigmaMs   standard deviation of the speed, m/s: the image sigma carried through the Jacobian along the
- *                       direction of motion and through the derivative weights; a lower bound (see
+ * @param positionSigmaM standard deviation per axis of {@code raw}, metres: the calibration's RMS image error and the
+ *                       box's own uncertainty carried through the homography's local Jacobian, and the boxes' scatter
+ *                       about the smoothed path (see {@link GroundTrajectory})
+ * @param speedSigmaMs   standard deviation of the speed, m/s: each frame's image sigma carried through the Jacobian
+ *                       along the direction of motion and through the derivative weights; it leaves out a
+ *                       calibration error shared by neighbouring positions (see
  *                       {@link GroundTrajectory}); NaN where the speed is NaN. About 7 times larger on a run's first
  *                       and last frames, where the window is shifted and the slope is taken at its end.
  */

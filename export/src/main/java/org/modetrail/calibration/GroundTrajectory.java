@@ -35,15 +35,22 @@ import org.modetrail.model.WorldPoint;
  * equation number from memory). An image error of sigma_px in each image axis, independent, maps to the ground
  * through the homography's Jacobian J at the contact point (for (x, y) = (a/w, b/w): dx/du = (h11 - x h31)/w, dx/dv =
  * (h12 - x h32)/w, dy/du = (h21 - y h31)/w, dy/dv = (h22 - y h32)/w), giving the covariance sigma_px^2 J J^T. The
- * reported position sigma is the RMS of its two axis sigmas, sigma_px ||J||_F / sqrt 2. sigma_px is the
- * calibration's RMS image error (or one given by the caller). The speed sigma carries the position errors along the
+ * reported position sigma is the RMS of its two axis sigmas, sigma_px ||J||_F / sqrt 2. sigma_px is, per frame,
+ * the calibration's RMS image error (or one given by the caller) and the box's own uncertainty
+ * ({@link FrameAnnotation#uncertaintyPx()}: the tracking's, of the box's edges, so it holds the contact point's share
+ * of the box's size error too), independent and so combined in quadrature; a box whose uncertainty is not known
+ * has the calibration's alone. The speed sigma carries the position errors along the
  * direction of motion d (variance sigma_px^2 |J^T d|^2 at sample j) through the derivative weights c_j as
  * independent errors: sigma_v = sqrt(sum c_j^2 sigma_d,j^2) (= sigma_p sqrt(sum c_j^2) when they are equal and the
  * errors isotropic); to first order that is the sigma of |v|. The tracker's box jitter is added to it, estimated per run from the
- * scatter of the raw positions about the smoothed ones ({@link #addTrackingJitter}). Even so the speed sigma is a
- * lower bound: a calibration error shifts neighbouring positions alike (the errors are correlated), which moves
- * all positions together and scales speeds by a common factor that no smoothing averages away. The position sigma is that of the raw
- * position, for the same reason (smoothing does not reduce a shared calibration error).
+ * scatter of the raw positions about the smoothed ones ({@link #addTrackingJitter}); where a box's own uncertainty
+ * is known this partly counts the same random jitter twice, which errs on the side of a wider interval. Errors are
+ * taken as independent from frame to frame, which they are not quite: a calibration error shifts neighbouring
+ * positions alike and scales speeds by a common factor that no smoothing averages away (not in the sigma), and a
+ * tracker's drift is an error that changes slowly, whose effect on the speed is its rate of change rather than its
+ * size (the sigma may then be too large or too small). The position sigma is that of the raw position, since
+ * smoothing does not reduce a shared calibration error. How often the stated intervals hold on tracked boxes is
+ * measured in tests/…/cli/RoadSpeedCoverageTest.
  */
 public final class GroundTrajectory {
 
@@ -91,7 +98,8 @@ public final class GroundTrajectory {
     /**
      * The ground path with a bare homography.
      *
-     * @param pixelSigma standard deviation of the contact point's image position per axis, pixels (0 or more)
+     * @param pixelSigma standard deviation of the contact point's image position per axis, pixels (0 or more), from
+     *                   the calibration; each box's own uncertainty is added to it in quadrature
      */
     public static List<GroundSample> of(Track track, ContactPoint contact, Homography imageToWorld, double pixelSigma,
                                         IntToDoubleFunction timeOfFrame, TrajectoryConfig config) {
@@ -159,15 +167,17 @@ public final class GroundTrajectory {
             double j12 = (h[1] - px * h[7]) / w;
             double j21 = (h[3] - py * h[6]) / w;
             double j22 = (h[4] - py * h[7]) / w;
+            // The calibration's error and the box's own (its edges, so the contact point's) are independent.
+            double imageSigma = a.hasUncertainty() ? Math.hypot(pixelSigma, a.uncertaintyPx()) : pixelSigma;
             frame[n] = a.frame();
             t[n] = time;
             x[n] = px;
             y[n] = py;
-            sigma[n] = pixelSigma * Math.sqrt((j11 * j11 + j12 * j12 + j21 * j21 + j22 * j22) / 2);
-            j11s[n] = pixelSigma * j11;
-            j12s[n] = pixelSigma * j12;
-            j21s[n] = pixelSigma * j21;
-            j22s[n] = pixelSigma * j22;
+            sigma[n] = imageSigma * Math.sqrt((j11 * j11 + j12 * j12 + j21 * j21 + j22 * j22) / 2);
+            j11s[n] = imageSigma * j11;
+            j12s[n] = imageSigma * j12;
+            j21s[n] = imageSigma * j21;
+            j22s[n] = imageSigma * j22;
             n++;
         }
 

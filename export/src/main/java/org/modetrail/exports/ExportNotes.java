@@ -65,10 +65,14 @@ public final class ExportNotes {
             ObjectNode speed = root.putObject("speed");
             speed.put("method", "Savitzky-Golay polynomial of order " + trajectory.order() + " over "
                     + trajectory.windowS() + " s windows of consecutive frames, its first derivative");
-            speed.put("uncertainty", "one standard uncertainty: the calibration's reprojection RMS carried through "
-                    + "the homography's Jacobian, plus the boxes' scatter about the smoothed path, taken as "
-                    + "independent between frames; a lower bound, since a calibration error is shared by "
-                    + "neighbouring positions");
+            speed.put("uncertainty", "one standard uncertainty (about a 68% interval; speed ± 1.96 sigma is about "
+                    + "95%): each box's own uncertainty (uncertainty_px: the keyframe's placement, the disagreement "
+                    + "of the forward and backward tracking passes, a similarity below the usual, a jump of the box's "
+                    + "size, and for interpolated boxes the distance from the nearest box the tracker saw) combined "
+                    + "with the calibration's reprojection RMS, carried through the homography's Jacobian and the "
+                    + "smoothing's derivative weights, plus the boxes' scatter about the smoothed path; errors are "
+                    + "taken as independent between frames. A calibration error shared by neighbouring positions "
+                    + "is not in it.");
             speed.put("contact_point", "each class's ground contact point on the box (bottom centre unless the "
                     + "project says otherwise); the box's bottom centre is not a fixed point of a long vehicle");
         }
@@ -88,6 +92,8 @@ public final class ExportNotes {
                 u.put("width, height", "pixels");
                 u.put("source", "keyframe (set by a person), tracked, interpolated");
                 u.put("score", "similarity 0 to 1 (Bhattacharyya coefficient of colour histograms); 1 for keyframes");
+                u.put(TracksCsv.UNCERTAINTY_COLUMN, "pixels, one standard uncertainty per axis of the box's edges; "
+                        + "empty where not known");
                 if (ground) {
                     for (String col : TracksCsv.GROUND_COLUMNS.split(",")) {
                         u.put(col, switch (col) {

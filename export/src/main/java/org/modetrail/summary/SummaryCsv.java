@@ -16,13 +16,14 @@ import org.modetrail.model.Zone;
 
 /**
  * The per-track summary as CSV, one row per track: {@code track_id,class,first_frame,last_frame,boxed_frames,
- * duration_s,path_px,path_m,mean_speed_m_s,peak_speed_m_s,peak_speed_sigma_m_s}, then {@code zone:NAME:s} per zone
+ * duration_s,path_px,path_m,mean_speed_m_s,peak_speed_m_s,peak_speed_sigma_m_s,peak_left_out_frames} (the frames
+ * with a speed that the peak leaves out, see {@link TrackSummaries}), then {@code zone:NAME:s} per zone
  * and {@code line:NAME:left_to_right}, {@code line:NAME:right_to_left} per counting line. Empty cells where a value
  * needs a calibration the project does not have. Dot decimals whatever the locale; written atomically.
  */
 public final class SummaryCsv {
     public static final String FIXED_HEADER = "track_id,class,first_frame,last_frame,boxed_frames,duration_s,"
-            + "path_px,path_m,mean_speed_m_s,peak_speed_m_s,peak_speed_sigma_m_s";
+            + "path_px,path_m,mean_speed_m_s,peak_speed_m_s,peak_speed_sigma_m_s,peak_left_out_frames";
 
     private SummaryCsv() {
     }
@@ -45,6 +46,7 @@ public final class SummaryCsv {
                 cells.add(number(s.meanSpeedMs(), 3));
                 cells.add(number(s.peakSpeedMs(), 3));
                 cells.add(number(s.peakSpeedSigmaMs(), 3));
+                cells.add(Double.isFinite(s.pathLengthM()) ? Integer.toString(s.peakLeftOut()) : "");
                 for (Zone z : site.zones()) {
                     cells.add(number(s.secondsInZone().getOrDefault(z.name(), 0.0), 4));
                 }

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.modetrail.model.Box;
+import org.modetrail.model.BoxSource;
 import org.modetrail.model.ContactPoint;
 import org.modetrail.model.CountingLine;
 import org.modetrail.model.FrameAnnotation;
@@ -19,8 +20,20 @@ import org.modetrail.model.Zone;
  * lines are judged in the image, so they work without a calibration; a frame counts towards a zone for its own
  * duration (the time to the next frame). Paths and crossings run between consecutive frames that both have a box:
  * across a hidden span or frames without a box nothing is inferred.
+ *
+ * <p>The peak speed is the largest speed among the frames whose speed is measured well enough to stand as a peak: a
+ * maximum picks out the frames whose error happens to be largest, so a frame of doubtful size or place would
+ * otherwise make the peak. Left out are interpolated boxes (the tracker did not see the object there) and speeds
+ * whose standard uncertainty is above {@link #PEAK_MAX_RELATIVE_SIGMA} of the speed; how many were left out is in
+ * {@link TrackSummary#peakLeftOut()}. The mean speed keeps every frame.
  */
 public final class TrackSummaries {
+    /**
+     * A speed whose standard uncertainty is above this share of it is left out of the peak: 0.1, so a peak's 95%
+     * interval (k = 1.96, JCGM 100:2008 annex G) is within about ±20% of it. Rule of thumb, no source.
+     */
+    public static final double PEAK_MAX_RELATIVE_SIGMA = 0.1;
+
     private TrackSummaries() {
     }
 
@@ -110,6 +123,7 @@ public final class TrackSummaries {
         double mean = Double.NaN;
         double peak = Double.NaN;
         double peakSigma = Double.NaN;
+        int leftOut = 0;
         if (path != null && path.frames().length > 0) {
             pathM = 0;
             for (int i = 1; i < path.frames().length; i++) {
@@ -124,7 +138,9 @@ public final class TrackSummaries {
                 if (Double.isFinite(v)) {
                     sum += v;
                     n++;
-                    if (!(v <= peak)) {
+                    if (!peakWorthy(t.frames().get(path.frames()[i]), v, path.speedSigmaMs()[i])) {
+                        leftOut++;
+                    } else if (!(v <= peak)) {
                         peak = v;
                         peakSigma = path.speedSigmaMs()[i];
                     }
@@ -133,7 +149,15 @@ public final class TrackSummaries {
             mean = n > 0 ? sum / n : Double.NaN;
         }
         return new TrackSummary(t.id(), t.className(), first, last, boxed, duration, pathPx, pathM, mean, peak,
-                peakSigma, zoneSeconds, crossings);
+                peakSigma, leftOut, zoneSeconds, crossings);
+    }
+
+    /** Whether a frame's speed may stand as a peak (see the class comment). */
+    static boolean peakWorthy(FrameAnnotation a, double speed, double sigma) {
+        if (a != null && a.source() == BoxSource.INTERPOLATED) {
+            return false;
+        }
+        return !(sigma > PEAK_MAX_RELATIVE_SIGMA * speed);
     }
 
     /**

@@ -14,11 +14,15 @@ import java.util.Map;
  * @param meanSpeedMs       mean of the smoothed speeds, NaN without a calibration
  * @param peakSpeedMs       the largest smoothed speed, NaN without a calibration
  * @param peakSpeedSigmaMs  the standard uncertainty of that peak speed
+ * @param peakLeftOut       frames with a speed that the peak leaves out ({@link TrackSummaries#PEAK_MAX_RELATIVE_SIGMA}:
+ *                          interpolated boxes, and speeds whose uncertainty is too large for a peak); 0 without a
+ *                          calibration
  * @param secondsInZone     per zone name (in the project's order), seconds the contact point was inside
  */
 public record TrackSummary(int trackId, String className, int firstFrame, int lastFrame, int boxedFrames,
                            double durationS, double pathLengthPx, double pathLengthM, double meanSpeedMs,
-                           double peakSpeedMs, double peakSpeedSigmaMs, Map<String, Double> secondsInZone,
+                           double peakSpeedMs, double peakSpeedSigmaMs, int peakLeftOut,
+                           Map<String, Double> secondsInZone,
                            List<LineCrossing> crossings) {
     public TrackSummary {
         secondsInZone = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(secondsInZone));

@@ -83,5 +83,26 @@ class TrackSummariesTest {
         assertEquals(45, s.meanSpeedMs(), 1e-12);
         assertEquals(50, s.peakSpeedMs(), 1e-12);
         assertEquals(0.5, s.peakSpeedSigmaMs(), 1e-12);
+        assertEquals(0, s.peakLeftOut());
+    }
+
+    @Test
+    void theTopSpeedOfADoubtfulFrameIsLeftOutOfThePeakAndCounted() {
+        // Frame 2 has the largest speed but a sigma of 20% of it (above the 10% bound), frame 3 is interpolated:
+        // the peak is frame 1's, and the two are counted as left out. The mean keeps all four.
+        Map<Integer, FrameAnnotation> f = new TreeMap<>();
+        for (int i = 0; i < 5; i++) {
+            Box b = new Box(i, 100, 10, 20);
+            f.put(i, i == 3 ? FrameAnnotation.interpolated(i, b, 4) : FrameAnnotation.tracked(i, b, 0.9, 1));
+        }
+        Project p = new Project(new VideoRef("v.mp4", 200, 200, FRAMES, ""), List.of(new ObjectClass("car", 0)),
+                List.of(new Track(1, "car", "", f)), Site.NONE);
+        GroundPath path = new GroundPath(1, new int[] {0, 1, 2, 3, 4}, new double[] {0, 1, 2, 3, 4}, new double[5],
+                new double[] {10, 12, 20, 30, Double.NaN}, new double[] {0.5, 1.2, 4, 1, Double.NaN});
+        TrackSummary s = TrackSummaries.of(p, times(), Map.of(1, path)).get(0);
+        assertEquals(12, s.peakSpeedMs(), 1e-12, "1.2 is exactly at the bound, so frame 1 stays");
+        assertEquals(1.2, s.peakSpeedSigmaMs(), 1e-12);
+        assertEquals(2, s.peakLeftOut());
+        assertEquals(18, s.meanSpeedMs(), 1e-12);
     }
 }

@@ -105,11 +105,11 @@ class CalibrateAndSummaryCommandTest {
         String[] car = rows.get(1).split(",");
         String[] truck = rows.get(2).split(",");
         // Car 1 drives away (+y) and the truck towards the camera: one crossing each, in opposite directions.
-        assertEquals(1, Integer.parseInt(car[12]) + Integer.parseInt(car[13]), rows.get(1));
-        assertEquals(1, Integer.parseInt(truck[12]) + Integer.parseInt(truck[13]), rows.get(2));
-        assertEquals(car[12], truck[13], "opposite directions");
+        assertEquals(1, Integer.parseInt(car[13]) + Integer.parseInt(car[14]), rows.get(1));
+        assertEquals(1, Integer.parseInt(truck[13]) + Integer.parseInt(truck[14]), rows.get(2));
+        assertEquals(car[13], truck[14], "opposite directions");
         // 3 m of crossing at 13.9 m/s is 0.22 s, 5.5 frames; within 3 frames either way for the sliding contact.
-        assertEquals(0.22, Double.parseDouble(car[11]), 0.12, rows.get(1));
+        assertEquals(0.22, Double.parseDouble(car[12]), 0.12, rows.get(1));
         Path broken = Files.writeString(dir.resolve("broken.json"), zones.replace("\"to\"", "\"towards\""));
         RoadFixture.Run bad = RoadFixture.run("summary", projectFile.toString(), "--zones", broken.toString());
         assertEquals(2, bad.code());

@@ -48,11 +48,14 @@ class ExportCommandsTest {
                 out.toString());
         assertEquals(0, r.code(), r.err());
         List<String> lines = Files.readAllLines(out);
-        assertEquals(TracksCsv.HEADER + "," + TracksCsv.GROUND_COLUMNS, lines.get(0));
+        assertEquals(TracksCsv.HEADER + "," + TracksCsv.UNCERTAINTY_COLUMN + "," + TracksCsv.GROUND_COLUMNS,
+                lines.get(0));
         String[] mid = lines.get(100).split(",");
-        assertEquals(16, mid.length, lines.get(100));
+        assertEquals(17, mid.length, lines.get(100));
+        // The project's boxes are keyframes: the user's placement uncertainty, 1 px.
+        assertEquals(1.0, Double.parseDouble(mid[10]), 1e-9, lines.get(100));
         // Car 1 drives away from the camera along x = 1.75 m (clips/README.md): its contact point stays in its lane.
-        assertEquals(1.75, Double.parseDouble(mid[10]), 1.2, "world x of " + lines.get(100));
+        assertEquals(1.75, Double.parseDouble(mid[11]), 1.2, "world x of " + lines.get(100));
         JsonNode notes = new ObjectMapper().readTree(dir.resolve("road.csv.about.json").toFile());
         assertEquals("csv", notes.get("format").asText());
         assertTrue(notes.get("software").asText().startsWith("Modetrail"));

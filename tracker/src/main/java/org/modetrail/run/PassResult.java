@@ -1,16 +1,20 @@
 package org.modetrail.run;
 
+import java.util.Arrays;
+
 import org.modetrail.model.Box;
 
 /**
- * What one tracking pass found on the frames strictly between two keyframes, {@code first..last}: per frame a box
- * and its similarity where the tracker was sure of it (status tracked), nothing where it coasted or had lost the
- * object. Filled in frame by frame by a pass, then read by {@link SpanFill}.
+ * What one tracking pass found on the frames strictly between two keyframes, {@code first..last}: per frame a box,
+ * its similarity and, where the tracker states one, its own uncertainty, where the tracker was sure of it (status
+ * tracked); nothing where it coasted or had lost the object. Filled in frame by frame by a pass, then read by
+ * {@link SpanFill}.
  */
 public final class PassResult {
     private final int first;
     private final Box[] boxes;
     private final double[] scores;
+    private final double[] uncertainties;
 
     /** An empty result for frames {@code first..last} inclusive (empty when last < first). */
     public PassResult(int first, int last) {
@@ -18,6 +22,8 @@ public final class PassResult {
         int n = Math.max(0, last - first + 1);
         boxes = new Box[n];
         scores = new double[n];
+        uncertainties = new double[n];
+        Arrays.fill(uncertainties, Double.NaN);
     }
 
     public int first() {
@@ -32,10 +38,23 @@ public final class PassResult {
         return frame >= first && frame < first + boxes.length;
     }
 
-    /** Records a box the tracker was sure of. */
+    /** Records a box the tracker was sure of, without an uncertainty of its own. */
     public void put(int frame, Box box, double score) {
+        put(frame, box, score, Double.NaN);
+    }
+
+    /**
+     * Records a box the tracker was sure of with the tracker's own one-sigma uncertainty of its edges, pixels per
+     * axis (NaN where the tracker states none); {@link SpanFill} combines it with what it works out itself.
+     */
+    public void put(int frame, Box box, double score, double uncertaintyPx) {
+        if (!Double.isNaN(uncertaintyPx) && !(uncertaintyPx >= 0 && uncertaintyPx < Double.POSITIVE_INFINITY)) {
+            throw new IllegalArgumentException("frame " + frame + ": the uncertainty must be 0 or more pixels (NaN"
+                    + " where not known), got " + uncertaintyPx);
+        }
         boxes[frame - first] = box;
         scores[frame - first] = score;
+        uncertainties[frame - first] = uncertaintyPx;
     }
 
     /** The box on {@code frame}, or null where the pass had none. */
@@ -45,5 +64,10 @@ public final class PassResult {
 
     public double score(int frame) {
         return covers(frame) ? scores[frame - first] : 0;
+    }
+
+    /** The tracker's own uncertainty on {@code frame}, NaN where it stated none or the pass had no box. */
+    public double uncertaintyPx(int frame) {
+        return covers(frame) ? uncertainties[frame - first] : Double.NaN;
     }
 }

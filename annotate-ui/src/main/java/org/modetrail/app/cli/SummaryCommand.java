@@ -15,6 +15,7 @@ import org.modetrail.model.Zone;
 import org.modetrail.summary.CrossingDirection;
 import org.modetrail.summary.MeasurementCaution;
 import org.modetrail.summary.ProjectSummary;
+import org.modetrail.summary.TrackSummaries;
 import org.modetrail.summary.TrackSummary;
 import org.modetrail.video.VideoSource;
 
@@ -90,9 +91,16 @@ public final class SummaryCommand implements Callable<Integer> {
                 if (Double.isFinite(s.peakSpeedMs())) {
                     w.printf(Locale.ROOT, ", mean speed %.2f m/s, peak %.2f ± %.2f m/s", s.meanSpeedMs(),
                             s.peakSpeedMs(), s.peakSpeedSigmaMs());
+                } else if (Double.isFinite(s.meanSpeedMs())) {
+                    w.printf(Locale.ROOT, ", mean speed %.2f m/s, no peak speed", s.meanSpeedMs());
                 } else {
                     w.print(", too short for a speed");
                 }
+            }
+            if (metres && s.peakLeftOut() > 0) {
+                w.printf(Locale.ROOT, " (%d frame%s left out of the peak: interpolated, or speed uncertain by more"
+                        + " than %.0f%%)", s.peakLeftOut(), s.peakLeftOut() == 1 ? "" : "s",
+                        100 * TrackSummaries.PEAK_MAX_RELATIVE_SIGMA);
             }
             w.println();
             for (Zone z : site.zones()) {

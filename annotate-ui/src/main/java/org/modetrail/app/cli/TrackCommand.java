@@ -40,8 +40,9 @@ import picocli.CommandLine.Spec;
         description = {"Follows every track of KEYS.csv through the video and writes whole tracks to TRACKS.csv.",
                 "KEYS.csv: header track_id,frame,x,y,width,height with an optional class column; frames 0-based, "
                         + "boxes as top-left corner and size in pixels.",
-                "TRACKS.csv: track_id,class,frame,time_s,x,y,width,height,source,score, one row per frame with a "
-                        + "box; source is keyframe, tracked or interpolated; score the similarity 0-1."})
+                "TRACKS.csv: track_id,class,frame,time_s,x,y,width,height,source,score,uncertainty_px, one row per "
+                        + "frame with a box; source is keyframe, tracked or interpolated; score the similarity 0-1; "
+                        + "uncertainty_px the box's one-sigma uncertainty in pixels."})
 public final class TrackCommand implements Callable<Integer> {
     /** Class colours for new classes: Okabe and Ito's colour-blind-safe palette ("Color Universal Design", 2002). */
     private static final int[] PALETTE = {0xE69F00, 0x56B4E9, 0x009E73, 0xF0E442, 0x0072B2, 0xD55E00, 0xCC79A7};

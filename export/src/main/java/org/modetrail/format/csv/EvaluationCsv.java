@@ -25,7 +25,8 @@ public final class EvaluationCsv {
     private static final int MAX_ROWS = 50_000_000;
 
     static {
-        List<String> o = new ArrayList<>(List.of("visible", "class", "time_s", "source", "score"));
+        List<String> o = new ArrayList<>(List.of("visible", "class", "time_s", "source", "score",
+                TracksCsv.UNCERTAINTY_COLUMN));
         o.addAll(List.of(TracksCsv.GROUND_COLUMNS.split(",")));
         OPTIONAL = List.copyOf(o);
     }

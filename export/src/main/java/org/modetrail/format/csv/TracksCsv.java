@@ -21,13 +21,17 @@ import org.modetrail.model.Project;
 import org.modetrail.model.Track;
 
 /**
- * Writes tracks as CSV: header {@code track_id,class,frame,time_s,x,y,width,height,source,score}, one row per frame
- * on which a track has a box, sorted by track then frame; time from each frame's presentation timestamp; numbers
- * with a dot whatever the locale. Written to a temporary file and moved into place, so a failure never leaves a
+ * Writes tracks as CSV: header {@code track_id,class,frame,time_s,x,y,width,height,source,score,uncertainty_px}, one
+ * row per frame on which a track has a box, sorted by track then frame; time from each frame's presentation
+ * timestamp; {@code uncertainty_px} the box's one-sigma uncertainty per axis in pixels
+ * ({@link FrameAnnotation#uncertaintyPx()}), empty where not known; numbers with a dot whatever the locale. Written to a temporary file and moved into place, so a failure never leaves a
  * half-written file under the name asked for.
  */
 public final class TracksCsv {
+    /** The columns every tracks file has (readers require them). */
     public static final String HEADER = "track_id,class,frame,time_s,x,y,width,height,source,score";
+    /** The box's uncertainty, written after {@link #HEADER}'s columns; readers accept files without it. */
+    public static final String UNCERTAINTY_COLUMN = "uncertainty_px";
 
     private TracksCsv() {
     }
@@ -54,6 +58,8 @@ public final class TracksCsv {
         AtomicWrite.replace(out, raw -> {
             BufferedWriter w = new BufferedWriter(new OutputStreamWriter(raw, StandardCharsets.UTF_8), 1 << 16);
             w.write(HEADER);
+            w.write(',');
+            w.write(UNCERTAINTY_COLUMN);
             if (ground != null) {
                 w.write(',');
                 w.write(GROUND_COLUMNS);
@@ -77,6 +83,8 @@ public final class TracksCsv {
                             a.frame(), timeOfFrame.applyAsDouble(a.frame()), a.box().x(), a.box().y(),
                             a.box().width(), a.box().height(), a.source().name().toLowerCase(Locale.ROOT),
                             a.score()));
+                    w.write(',');
+                    w.write(finite(a.uncertaintyPx(), 3));
                     if (ground != null) {
                         GroundSample g = byFrame.get(a.frame());
                         if (g == null) {

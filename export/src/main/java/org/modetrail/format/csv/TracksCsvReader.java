@@ -20,7 +20,9 @@ import org.modetrail.model.Project;
 import org.modetrail.model.VideoRef;
 
 /**
- * Reads the tracks file {@link TracksCsv} writes (header {@value TracksCsv#HEADER}, columns in any order) back into
+ * Reads the tracks file {@link TracksCsv} writes (header {@value TracksCsv#HEADER}, optionally
+ * {@value TracksCsv#UNCERTAINTY_COLUMN} (an empty cell: not known; files without the column read as not known), and
+ * the ground columns of a calibrated export, which are ignored; columns in any order) back into
  * a project on the given video. The {@code source} column becomes each box's source, so keyframes stay keyframes
  * and tracked boxes stay tracked; {@code time_s} is checked to be a number and otherwise not used (the frame
  * decides). Classes are taken in the order the file first names them, with palette colours. Every problem names
@@ -67,10 +69,10 @@ public final class TracksCsvReader {
         Map<String, Integer> columns = new HashMap<>();
         for (int i = 0; i < names.size(); i++) {
             String name = names.get(i).toLowerCase(Locale.ROOT);
-            if (!COLUMNS.contains(name) && !GROUND.contains(name)) {
+            if (!COLUMNS.contains(name) && !GROUND.contains(name) && !name.equals(TracksCsv.UNCERTAINTY_COLUMN)) {
                 throw new ImportException(file, 1, 0, null, "unknown column '" + names.get(i) + "'; a tracks file"
-                        + " has the columns " + TracksCsv.HEADER + " and, from a calibrated project, "
-                        + TracksCsv.GROUND_COLUMNS);
+                        + " has the columns " + TracksCsv.HEADER + ", optionally " + TracksCsv.UNCERTAINTY_COLUMN
+                        + " and, from a calibrated project, " + TracksCsv.GROUND_COLUMNS);
             }
             if (columns.put(name, i) != null) {
                 throw new ImportException(file, 1, 0, null, "column '" + name + "' appears twice");
@@ -123,9 +125,19 @@ public final class TracksCsvReader {
         if (!(score >= 0 && score <= 1)) {
             throw at.error(file, "score must be between 0 and 1, got " + score);
         }
+        double uncertainty = Double.NaN;
+        Integer uncertaintyColumn = columns.get(TracksCsv.UNCERTAINTY_COLUMN);
+        if (uncertaintyColumn != null && !f.get(uncertaintyColumn).isBlank()) {
+            uncertainty = number(file, at, f, columns, TracksCsv.UNCERTAINTY_COLUMN);
+            if (!(uncertainty >= 0)) {
+                throw at.error(file, TracksCsv.UNCERTAINTY_COLUMN + " must be 0 or more pixels (empty where not"
+                        + " known), got " + uncertainty);
+            }
+        }
         tracks.checkedFrame(frame, frame, at);
         Box box = tracks.checkedBox(x, y, w, h, at);
-        tracks.add(trackId, className, new FrameAnnotation(frame, Presence.VISIBLE, box, source, score), at);
+        tracks.add(trackId, className, new FrameAnnotation(frame, Presence.VISIBLE, box, source, score, uncertainty),
+                at);
     }
 
     private static int whole(Path file, Place at, List<String> f, Map<String, Integer> c, String name)

@@ -64,7 +64,13 @@ final class JsonCursor {
     }
 
     double readDouble(String what) throws IOException {
-        JsonToken t = next();
+        next();
+        return currentDouble(what);
+    }
+
+    /** The number the cursor is on (after {@link #next()}). */
+    double currentDouble(String what) throws IOException {
+        JsonToken t = current();
         if (t != JsonToken.VALUE_NUMBER_INT && t != JsonToken.VALUE_NUMBER_FLOAT) {
             throw fail(what + " should be a number, found " + describe(t));
         }

@@ -21,7 +21,12 @@ import org.modetrail.model.Project;
  */
 public final class ProjectFile {
     /** The schema this version writes; it reads this one and every older one. */
-    public static final int CURRENT_SCHEMA = 2;
+    public static final int CURRENT_SCHEMA = 3;
+    /**
+     * Schemas from this one on are read by the streaming reader as they are (each is a later one without its
+     * optional additions), so their errors keep line and column; older ones go through the upgrade chain.
+     */
+    static final int STREAMED_FROM = 2;
 
     private ProjectFile() {
     }
@@ -43,8 +48,8 @@ public final class ProjectFile {
                 throw new ProjectFileException(file, 0, 0, "written by a newer Modetrail (schema " + schema
                         + "); this version reads schema " + CURRENT_SCHEMA + " and older: update Modetrail");
             }
-            if (schema == CURRENT_SCHEMA) {
-                return reader.read();
+            if (schema >= STREAMED_FROM) {
+                return reader.read(schema);
             }
             ObjectMapper mapper = ProjectJson.treeMapper(limits);
             JsonNode tree;

@@ -83,8 +83,20 @@ final class ProjectReader {
         }
     }
 
+    /** Whether a visible frame may carry its uncertainty (schema 3 on). */
+    private boolean uncertainties = true;
+
     /** Reads the whole project; call after {@link #schema()} said it is the current schema. */
     Project read() throws IOException {
+        return read(ProjectFile.CURRENT_SCHEMA);
+    }
+
+    /**
+     * Reads the whole project of a schema whose layout is the current one's or a subset of it
+     * ({@link ProjectFile#STREAMED_FROM} on), refusing what that schema did not have.
+     */
+    Project read(int schema) throws IOException {
+        uncertainties = schema >= 3;
         Header header = readHeader();
         try (JsonParser p = source.open()) {
             JsonCursor c = new JsonCursor(p, file);
@@ -340,7 +352,7 @@ final class ProjectReader {
         return frames;
     }
 
-    private static FrameAnnotation readFrame(JsonCursor c, VideoRef video, String track) throws IOException {
+    private FrameAnnotation readFrame(JsonCursor c, VideoRef video, String track) throws IOException {
         JsonLocation at = c.location();
         int frame = c.readInt(track + ": the frame number");
         String here = track + " frame " + frame;
@@ -374,10 +386,23 @@ final class ProjectReader {
         if (!(score >= 0 && score <= 1)) {
             throw c.fail(here + ": score " + score + " should be between 0 and 1");
         }
-        if (c.next() != JsonToken.END_ARRAY) {
-            throw c.fail(here + ": too many values; a " + (box != null ? "visible frame has 8" : "mark has 4")
-                    + " ([frame, source, presence, " + (box != null ? "x, y, width, height, " : "") + "score])");
+        double uncertainty = Double.NaN;
+        JsonToken next = c.next();
+        if (box != null && uncertainties && next != JsonToken.END_ARRAY) {
+            uncertainty = c.currentDouble(here + ": the uncertainty in pixels");
+            if (!(uncertainty >= 0)) {
+                throw c.fail(here + ": uncertainty " + uncertainty + " px should be 0 or more (leave it out where"
+                        + " not known)");
+            }
+            next = c.next();
         }
-        return new FrameAnnotation(frame, presence, box, source, score);
+        if (next != JsonToken.END_ARRAY) {
+            boolean nine = box != null && uncertainties;
+            throw c.fail(here + ": too many values; a " + (box == null ? "mark has 4" : nine ? "visible frame has 8"
+                    + " or 9" : "visible frame has 8 in schema 2") + " ([frame, source, presence, "
+                    + (box != null ? "x, y, width, height, " : "") + "score" + (nine ? "[, uncertainty_px]" : "")
+                    + "])");
+        }
+        return new FrameAnnotation(frame, presence, box, source, score, uncertainty);
     }
 }

@@ -82,6 +82,9 @@ final class ProjectWriter {
                 number(g, b.height());
             }
             number(g, a.score());
+            if (a.hasUncertainty()) {
+                number(g, a.uncertaintyPx());
+            }
             g.writeEndArray();
         }
         g.writeEndArray();

@@ -9,7 +9,7 @@ import java.util.List;
  * the current schema. A new schema adds a step here and never changes the old ones, so any old file can be read.
  */
 final class SchemaUpgrades {
-    private static final List<SchemaUpgrade> STEPS = List.of(new Schema0To1(), new Schema1To2());
+    private static final List<SchemaUpgrade> STEPS = List.of(new Schema0To1(), new Schema1To2(), new Schema2To3());
 
     private SchemaUpgrades() {
     }

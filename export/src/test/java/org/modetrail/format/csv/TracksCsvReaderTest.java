@@ -100,6 +100,31 @@ class TracksCsvReaderTest {
     }
 
     @Test
+    void theUncertaintyComesBackAndFilesWithoutItReadAsNotKnown() throws Exception {
+        Project p = TracksCsvReader.read(Files.writeString(dir.resolve("u.csv"), TracksCsv.HEADER + ","
+                + TracksCsv.UNCERTAINTY_COLUMN + "\n1,car,0,0.0,10,10,20,20,keyframe,1,1.000\n"
+                + "1,car,1,0.04,11,10,20,20,tracked,0.8,3.250\n1,car,2,0.08,12,10,20,20,interpolated,0,\n"),
+                TrackSamples.VIDEO);
+        var t = p.tracks().get(0);
+        assertEquals(1.0, t.at(0).orElseThrow().uncertaintyPx());
+        assertEquals(3.25, t.at(1).orElseThrow().uncertaintyPx());
+        assertTrue(Double.isNaN(t.at(2).orElseThrow().uncertaintyPx()), "an empty cell is not known");
+        Project old = TracksCsvReader.read(Files.writeString(dir.resolve("old.csv"), H + OK), TrackSamples.VIDEO);
+        assertTrue(Double.isNaN(old.tracks().get(0).at(0).orElseThrow().uncertaintyPx()),
+                "a file without the column: not known");
+        // Written and read back: the printed precision (3 decimals) is kept.
+        Path file = dir.resolve("again.csv");
+        TracksCsv.write(p, f -> f * 0.04, file);
+        Project back = TracksCsvReader.read(file, TrackSamples.VIDEO);
+        assertEquals(3.25, back.tracks().get(0).at(1).orElseThrow().uncertaintyPx());
+        assertTrue(Double.isNaN(back.tracks().get(0).at(2).orElseThrow().uncertaintyPx()));
+
+        ImportException e = refused(TracksCsv.HEADER + ",uncertainty_px\n1,car,0,0.0,10,10,20,20,keyframe,1,-2\n");
+        assertEquals(2, e.line());
+        assertTrue(e.getMessage().contains("uncertainty_px must be 0 or more"), e.getMessage());
+    }
+
+    @Test
     void headerAndSizeLimitsAreChecked() throws Exception {
         ImportException e = refused("track_id,class,frame,x,y,width,height,source,score\n" + OK);
         assertEquals(1, e.line());

@@ -40,10 +40,11 @@ class TracksCsvTest {
             Locale.setDefault(saved);
         }
         List<String> lines = Files.readAllLines(dir.resolve("t.csv"));
-        assertEquals(List.of(TracksCsv.HEADER,
-                "1,car,0,0.000000,5.000,5.000,5.000,5.000,interpolated,0.0000",
-                "2,car,1,0.040000,0.000,0.000,3.000,4.000,keyframe,1.0000",
-                "2,car,3,0.120000,1.250,2.000,3.000,4.000,tracked,0.7500"), lines, "hidden frame 2 has no row");
+        // The keyframe carries the user's placement uncertainty; the others none, so their cells are empty.
+        assertEquals(List.of(TracksCsv.HEADER + "," + TracksCsv.UNCERTAINTY_COLUMN,
+                "1,car,0,0.000000,5.000,5.000,5.000,5.000,interpolated,0.0000,",
+                "2,car,1,0.040000,0.000,0.000,3.000,4.000,keyframe,1.0000,1.000",
+                "2,car,3,0.120000,1.250,2.000,3.000,4.000,tracked,0.7500,"), lines, "hidden frame 2 has no row");
         try (var files = Files.list(dir)) {
             assertFalse(files.anyMatch(f -> f.getFileName().toString().endsWith(".tmp")), "no temporary left");
         }

@@ -34,16 +34,18 @@ class ProjectFileRoundTripTest {
         // docs/project-file.md shows this layout; the two must agree.
         assertEquals("{", lines.get(0));
         assertEquals("  \"format\": \"modetrail-project\",", lines.get(1));
-        assertEquals("  \"schema\": 2,", lines.get(2));
+        assertEquals("  \"schema\": 3,", lines.get(2));
         assertEquals("  \"video\": {\"path\": \"clips/arena.mp4\", \"width\": 640, \"height\": 480, \"frames\": 300,"
                 + " \"fingerprint\": \"sha256:0f1e2d\"},", lines.get(3));
         assertTrue(lines.contains("    {\"name\": \"mouse\", \"colour\": \"#1F77B4\", \"contact\": [0.5,1]},"),
                 lines.toString());
-        assertTrue(lines.contains("      [0,\"k\",\"v\",10,20,30,40,1],"), lines.toString());
-        assertTrue(lines.contains("      [1,\"t\",\"v\",11.25,20.5,30.125,40.0625,0.9137254901960784],"));
+        assertTrue(lines.contains("      [0,\"k\",\"v\",10,20,30,40,1,1],"), lines.toString());
+        assertTrue(lines.contains("      [1,\"t\",\"v\",11.25,20.5,30.125,40.0625,0.9137254901960784,2.375],"));
+        assertTrue(lines.contains("      [2,\"i\",\"v\",12.333333333333334,21.1,30.2,40.1,0,4.5],"));
         assertTrue(lines.contains("      [3,\"k\",\"h\",1],"));
         assertTrue(lines.contains("      [4,\"k\",\"a\",1],"));
-        assertTrue(lines.contains("      [299,\"k\",\"v\",-3.5,-0.0,0,1.0E-7,1]"), lines.toString());
+        assertTrue(lines.contains("      [299,\"k\",\"v\",-3.5,-0.0,0,1.0E-7,1,1]"), lines.toString());
+        assertTrue(lines.contains("      [8,\"t\",\"v\",601,401,39.75,79.5,0]"), "an unknown uncertainty is left out");
     }
 
     @Test

@@ -24,8 +24,8 @@ final class SampleProjects {
         List<ObjectClass> classes = List.of(new ObjectClass("mouse", 0x1F77B4), new ObjectClass("käfer", 0xFF7F0E));
         Map<Integer, FrameAnnotation> a = new TreeMap<>();
         a.put(0, FrameAnnotation.keyframe(0, new Box(10, 20, 30, 40)));
-        a.put(1, FrameAnnotation.tracked(1, new Box(11.25, 20.5, 30.125, 40.0625), 0.9137254901960784));
-        a.put(2, FrameAnnotation.interpolated(2, new Box(12.333333333333334, 21.1, 30.2, 40.1)));
+        a.put(1, FrameAnnotation.tracked(1, new Box(11.25, 20.5, 30.125, 40.0625), 0.9137254901960784, 2.375));
+        a.put(2, FrameAnnotation.interpolated(2, new Box(12.333333333333334, 21.1, 30.2, 40.1), 4.5));
         a.put(3, FrameAnnotation.markedBy(3, Presence.HIDDEN));
         a.put(4, FrameAnnotation.markedBy(4, Presence.ABSENT));
         a.put(5, new FrameAnnotation(5, Presence.HIDDEN, null, BoxSource.TRACKED, 0.125));

@@ -11,7 +11,9 @@ import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.modetrail.model.Box;
+import org.modetrail.model.BoxSource;
 import org.modetrail.model.FrameAnnotation;
+import org.modetrail.model.Presence;
 import org.modetrail.model.ObjectClass;
 import org.modetrail.model.Project;
 import org.modetrail.model.Track;
@@ -41,7 +43,8 @@ class SchemaVersionTest {
         Project expected = new Project(new VideoRef("clip.mp4", 320, 240, 50, ""),
                 List.of(new ObjectClass("car", 0xD62728)),
                 List.of(new Track(3, "car", "old", Map.of(
-                        0, FrameAnnotation.keyframe(0, new Box(1, 2, 30, 20)),
+                        // Old files say nothing of uncertainty: their boxes read with it not known (NaN).
+                        0, new FrameAnnotation(0, Presence.VISIBLE, new Box(1, 2, 30, 20), BoxSource.KEYFRAME, 1),
                         1, FrameAnnotation.tracked(1, new Box(1.5, 2.25, 30, 20), 0.8),
                         2, FrameAnnotation.interpolated(2, new Box(2, 2.5, 30, 20))))));
         assertEquals(expected, p);
@@ -54,7 +57,7 @@ class SchemaVersionTest {
         Files.writeString(file, SCHEMA_0);
         Project p = ProjectFile.read(file);
         ProjectFile.write(p, file);
-        assertTrue(Files.readString(file).contains("\"schema\": 2,"));
+        assertTrue(Files.readString(file).contains("\"schema\": 3,"));
         assertEquals(SCHEMA_0, Files.readString(ProjectFile.backupFile(file)), "the old file is kept as .bak");
         assertEquals(p, ProjectFile.read(file));
     }
@@ -73,8 +76,44 @@ class SchemaVersionTest {
         Path file = dir.resolve("new.json");
         Files.writeString(file, "{\"format\": \"modetrail-project\", \"schema\": 7, \"video\": {\"new\": true}}");
         ProjectFileException e = assertThrows(ProjectFileException.class, () -> ProjectFile.read(file));
-        assertEquals(file + ": written by a newer Modetrail (schema 7); this version reads schema 2 and older: "
+        assertEquals(file + ": written by a newer Modetrail (schema 7); this version reads schema 3 and older: "
                 + "update Modetrail", e.getMessage());
+    }
+
+    private static final String SCHEMA_2 = """
+            {"format": "modetrail-project", "schema": 2,
+             "video": {"path": "clip.mp4", "width": 320, "height": 240, "frames": 50, "fingerprint": ""},
+             "classes": [{"name": "car", "colour": "#D62728"}],
+             "tracks": [{"id": 3, "class": "car", "frames": [
+               [0, "k", "v", 1, 2, 30, 20, 1],
+               [1, "t", "v", 1.5, 2.25, 30, 20, 0.8]
+             ]}]}
+            """;
+
+    @Test
+    void schemaTwoReadsWithTheUncertaintyNotKnownAndKeepsLineNumbers() throws Exception {
+        Path file = dir.resolve("two.json");
+        Files.writeString(file, SCHEMA_2);
+        Project p = ProjectFile.read(file);
+        assertTrue(Double.isNaN(p.track(3).orElseThrow().at(0).orElseThrow().uncertaintyPx()));
+        assertTrue(Double.isNaN(p.track(3).orElseThrow().at(1).orElseThrow().uncertaintyPx()));
+        // A ninth value is schema 3's: a schema-2 file with one is damaged, and the error says where.
+        Files.writeString(file, SCHEMA_2.replace("0.8]", "0.8, 2.5]"));
+        ProjectFileException e = assertThrows(ProjectFileException.class, () -> ProjectFile.read(file));
+        assertEquals(6, e.line(), e.getMessage());
+        assertTrue(e.getMessage().contains("too many values"), e.getMessage());
+    }
+
+    @Test
+    void schemaThreeKeepsTheUncertaintyAndRefusesANegativeOne() throws Exception {
+        Path file = dir.resolve("three.json");
+        Files.writeString(file, SCHEMA_2.replace("\"schema\": 2", "\"schema\": 3").replace("0.8]", "0.8, 2.5]"));
+        assertEquals(2.5, ProjectFile.read(file).track(3).orElseThrow().at(1).orElseThrow().uncertaintyPx());
+        Files.writeString(file, SCHEMA_2.replace("\"schema\": 2", "\"schema\": 3").replace("0.8]", "0.8, -1]"));
+        ProjectFileException e = assertThrows(ProjectFileException.class, () -> ProjectFile.read(file));
+        assertEquals(6, e.line(), e.getMessage());
+        assertTrue(e.getMessage().contains("track 3 frame 1: uncertainty -1.0 px should be 0 or more"),
+                e.getMessage());
     }
 
     @Test
