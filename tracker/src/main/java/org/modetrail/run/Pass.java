@@ -53,8 +53,14 @@ final class Pass {
             return; // the start frame was unreadable: nothing to track from
         }
         TrackStep step = tracker.track(frame);
-        if (step.status().found()) {
+        if (step.status() == TrackStatus.TRACKED) {
             result.put(n, step.box(), step.similarity());
+        } else if (step.status() == TrackStatus.REACQUIRED) {
+            // Found again after a search: the box may be another object that looks like this one. Its uncertainty
+            // is its own diagonal, so it is flagged for review and left out of peak speeds.
+            result.put(n, step.box(), step.similarity(), Math.hypot(step.box().width(), step.box().height()));
+        } else if (step.status() == TrackStatus.SEARCHING) {
+            result.markSearching(n);
         }
         if (step.status() == TrackStatus.LOST || n == stop) {
             finished = true;

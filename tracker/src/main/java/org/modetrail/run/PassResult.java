@@ -15,6 +15,8 @@ public final class PassResult {
     private final Box[] boxes;
     private final double[] scores;
     private final double[] uncertainties;
+    /** Frames the tracker had lost the object on (or saw it leave the frame) and was looking for it. */
+    private final boolean[] searching;
 
     /** An empty result for frames {@code first..last} inclusive (empty when last < first). */
     public PassResult(int first, int last) {
@@ -23,6 +25,7 @@ public final class PassResult {
         boxes = new Box[n];
         scores = new double[n];
         uncertainties = new double[n];
+        searching = new boolean[n];
         Arrays.fill(uncertainties, Double.NaN);
     }
 
@@ -64,6 +67,16 @@ public final class PassResult {
 
     public double score(int frame) {
         return covers(frame) ? scores[frame - first] : 0;
+    }
+
+    /** Records that the tracker had lost the object on {@code frame} and was searching for it. */
+    public void markSearching(int frame) {
+        searching[frame - first] = true;
+    }
+
+    /** Whether the tracker was searching for a lost object on {@code frame}. */
+    public boolean searching(int frame) {
+        return covers(frame) && searching[frame - first];
     }
 
     /** The tracker's own uncertainty on {@code frame}, NaN where it stated none or the pass had no box. */

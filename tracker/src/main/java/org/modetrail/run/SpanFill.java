@@ -121,7 +121,7 @@ public final class SpanFill {
             Box after = j < n ? box[j] : end != null && end.isVisible() ? end.box() : null;
             double afterSigma = j < n ? sigma[j] : endSigma;
             int afterFrame = j < n ? from + j : end != null ? end.frame() : to + 1;
-            if (before != null && after != null) {
+            if (before != null && after != null && !searchedBetween(forward, backward, from + i, from + j - 1)) {
                 int gap = afterFrame - beforeFrame;
                 double rate = Double.isNaN(motion) ? BoxUncertainty.motionVariance(before, after, gap) : motion;
                 for (int k = i; k < j; k++) {
@@ -134,6 +134,20 @@ public final class SpanFill {
             i = j - 1;
         }
         return out;
+    }
+
+    /**
+     * Whether a pass had lost the object somewhere in {@code a..b} and was searching for it: the object was gone
+     * for longer than a pass coasts, or left the frame, so a straight line between the boxes either side would
+     * be a guess, and the frames stay empty.
+     */
+    private static boolean searchedBetween(PassResult forward, PassResult backward, int a, int b) {
+        for (int f = a; f <= b; f++) {
+            if (forward.searching(f) || backward.searching(f)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**

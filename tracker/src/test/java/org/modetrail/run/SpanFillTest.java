@@ -37,6 +37,27 @@ class SpanFillTest {
     }
 
     @Test
+    void framesAPassSearchedForALostObjectOnAreNotInterpolated() {
+        PassResult fwd = new PassResult(1, 9);
+        PassResult bwd = new PassResult(1, 9);
+        fwd.put(1, at(1), 0.9);
+        fwd.put(2, at(2), 0.9);
+        for (int f = 3; f <= 6; f++) {
+            fwd.markSearching(f); // the object left: the tracker looked for it there
+        }
+        bwd.put(9, at(9), 0.9);
+        bwd.put(8, at(8), 0.9);
+        List<FrameAnnotation> out = SpanFill.fill(K0, K10, fwd, bwd, 1, 9, PassMerge.MORE_SIMILAR);
+        assertEquals(List.of(1, 2, 8, 9), out.stream().map(FrameAnnotation::frame).toList(),
+                "frames 3-7 stay empty: a gap with a search in it is not bridged by a straight line");
+        // The same gap without the search is interpolated, as before.
+        PassResult plain = new PassResult(1, 9);
+        plain.put(1, at(1), 0.9);
+        plain.put(2, at(2), 0.9);
+        assertEquals(9, SpanFill.fill(K0, K10, plain, bwd, 1, 9, PassMerge.MORE_SIMILAR).size());
+    }
+
+    @Test
     void aBlendWeighsAgreeingPassesBySimilarityAndNearnessToTheirKeyframe() {
         PassResult fwd = new PassResult(1, 9);
         PassResult bwd = new PassResult(1, 9);

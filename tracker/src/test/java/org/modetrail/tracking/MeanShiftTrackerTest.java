@@ -134,9 +134,9 @@ class MeanShiftTrackerTest {
     }
 
     @Test
-    void anObjectThatVanishesIsCoastedThenLost() {
+    void anObjectThatVanishesIsCoastedThenLostWhenReDetectionIsOff() {
         SyntheticScene scene = new SyntheticScene(320, 240, RED, 7);
-        TrackerConfig config = TrackerConfig.defaults();
+        TrackerConfig config = TrackerConfig.defaults().toBuilder().reDetect(false).build();
         MeanShiftTracker tracker = new MeanShiftTracker(config);
         Box b = new Box(100, 100, 40, 30);
         tracker.start(scene.frame(0, b), b);
@@ -151,6 +151,38 @@ class MeanShiftTrackerTest {
         assertEquals(TrackStatus.LOST, step.status());
         assertTrue(step.similarity() < config.lostSimilarity());
         assertThrows(IllegalStateException.class, () -> tracker.track(scene.frame(99, gone)));
+    }
+
+    @Test
+    void aLostObjectIsSearchedForAndReAcquiredOnlyWhereItComesBack() {
+        SyntheticScene scene = new SyntheticScene(320, 240, RED, 7);
+        TrackerConfig config = TrackerConfig.defaults();
+        MeanShiftTracker tracker = new MeanShiftTracker(config);
+        Box b = new Box(60, 100, 40, 30);
+        tracker.start(scene.frame(0, b), b);
+        Box gone = new Box(-500, -500, 1, 1);
+        TrackStep step = null;
+        // Gone for 80 frames: coasting, then searching, never found on the empty floor.
+        for (int i = 1; i <= 80; i++) {
+            step = tracker.track(scene.frame(i, gone));
+            assertTrue(step.status() == (i <= config.maxCoastFrames() ? TrackStatus.COASTING : TrackStatus.SEARCHING),
+                    "frame " + i + ": " + step.status());
+        }
+        assertTrue(tracker.isSearching());
+        // It comes back far from where it vanished: found again within a few searches, there, and marked as such.
+        Box back = new Box(240, 40, 40, 30);
+        int reacquiredAt = -1;
+        for (int i = 81; i <= 81 + 40 && reacquiredAt < 0; i++) {
+            step = tracker.track(scene.frame(i, back));
+            if (step.status() == TrackStatus.REACQUIRED) {
+                reacquiredAt = i;
+            }
+        }
+        assertTrue(reacquiredAt > 0, "never re-acquired");
+        assertTrue(reacquiredAt - 81 >= ReDetection.CONFIRM - 1, "re-acquired after " + (reacquiredAt - 81)
+                + " frames, before the search could confirm it");
+        assertTrue(step.box().iou(back) > 0.6, "re-acquired at " + step.box());
+        assertEquals(TrackStatus.TRACKED, tracker.track(scene.frame(200, back)).status());
     }
 
     @Test
