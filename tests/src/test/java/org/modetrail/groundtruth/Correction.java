@@ -38,7 +38,7 @@ sealed interface Correction {
     record Create(int frame, Box box, String why) implements Correction {
     }
 
-    /** The person's life is limited to {@code first..last} (what lies outside is another object or nothing). */
+    /** The person's boxes outside {@code first..last} are thrown out (what lies there is another object or nothing). */
     record Limit(Pick who, int first, int last, String why) implements Correction {
     }
 

@@ -25,9 +25,6 @@ final class Person {
     final NavigableMap<Integer, Double> visible = new TreeMap<>();
     /** The tracklets this person was made from, for messages. */
     final StringBuilder origin = new StringBuilder();
-    /** Hand limits of the life (inclusive), or -1. */
-    int firstLimit = -1;
-    int lastLimit = -1;
 
     Person(int id) {
         this.id = id;
@@ -49,13 +46,11 @@ final class Person {
     }
 
     int first() {
-        int f = anchors().firstKey();
-        return firstLimit >= 0 ? Math.max(f, firstLimit) : f;
+        return anchors().firstKey();
     }
 
     int last() {
-        int l = anchors().lastKey();
-        return lastLimit >= 0 ? Math.min(l, lastLimit) : l;
+        return anchors().lastKey();
     }
 
     /** The box on every frame of the life. */

@@ -35,6 +35,10 @@ import org.modetrail.video.VideoSource;
 public final class VtestTruth {
     static final int MIN_FRAMES = 50;
     static final int BACKGROUND_STEP = 3;
+    /** The longest gap in a person's measured boxes that the automatic pass bridges by interpolation. */
+    static final int MAX_AUTO_GAP = 12;
+    /** A box this close to the frame's border (px) is taken to be cut by it. */
+    static final int EDGE = 3;
     static final String HEADER = "track_id,frame,x,y,width,height,visible";
 
     /** The automatic pass: tracklets of the clip, plus its size. */
@@ -87,6 +91,27 @@ public final class VtestTruth {
             }
         }
         int created = 10_000;
+        for (Person p : new ArrayList<>(persons)) {
+            // a life with a long unmeasured gap is two lives until a hand join says otherwise: a tracklet that
+            // came back out of a group long after it went in is as often someone else
+            Integer prev = null;
+            Person cur = p;
+            for (int f : new ArrayList<>(p.measured.keySet())) {
+                if (prev != null && f - prev > MAX_AUTO_GAP) {
+                    Person q = new Person(created++);
+                    q.origin.append(p.origin).append("@").append(f);
+                    q.measured.putAll(p.measured.tailMap(f, true));
+                    q.blobs.putAll(p.blobs.tailMap(f, true));
+                    q.split.addAll(p.split.tailSet(f, true));
+                    cur.measured.tailMap(f, true).clear();
+                    cur.blobs.tailMap(f, true).clear();
+                    persons.add(q);
+                    cur = q;
+                }
+                prev = f;
+            }
+        }
+        persons.removeIf(Person::isEmpty);
         for (Correction c : table) {
             if (c instanceof Correction.Drop d) {
                 persons.remove(find(persons, d.who(), c));
@@ -118,8 +143,10 @@ public final class VtestTruth {
                 persons.add(p);
             } else if (c instanceof Correction.Limit l) {
                 Person p = find(persons, l.who(), c);
-                p.firstLimit = l.first();
-                p.lastLimit = l.last();
+                for (var m : List.of(p.measured, p.keys, p.blobs)) {
+                    m.headMap(l.first(), false).clear();
+                    m.tailMap(l.last(), false).clear();
+                }
             } else if (c instanceof Correction.Visible v) {
                 Person p = find(persons, v.who(), c);
                 for (int f = v.from(); f <= v.to(); f++) {
@@ -278,7 +305,7 @@ public final class VtestTruth {
     }
 
     static boolean touches(Box b, int width, int height) {
-        return b.x() <= 1 || b.y() <= 1 || b.right() >= width - 1 || b.bottom() >= height - 1;
+        return b.x() <= EDGE || b.y() <= EDGE || b.right() >= width - EDGE || b.bottom() >= height - EDGE;
     }
 
     static Box clip(Box b, int width, int height) {
@@ -319,12 +346,18 @@ public final class VtestTruth {
         Path csv = null;
         Path sheets = null;
         boolean raw = false;
+        List<Correction.Pick> show = new ArrayList<>();
         for (int i = 0; i < args.length; i++) {
             switch (args[i]) {
                 case "--video" -> video = Path.of(args[++i]);
                 case "--csv" -> csv = Path.of(args[++i]);
                 case "--sheets" -> sheets = Path.of(args[++i]);
                 case "--raw" -> raw = true;
+                case "--show" -> {
+                    String[] v = args[++i].split(",");
+                    show.add(new Correction.Pick(Integer.parseInt(v[0]), Integer.parseInt(v[1]),
+                            Integer.parseInt(v[2])));
+                }
                 default -> throw new IllegalArgumentException("unknown argument " + args[i]
                         + "; use --video FILE [--csv FILE] [--sheets DIR] [--raw]");
             }
@@ -339,6 +372,14 @@ public final class VtestTruth {
         int rows = tracks.stream().mapToInt(t -> t.boxes().size()).sum();
         System.out.println(pass.tracklets().size() + " tracklets, " + persons.size() + " persons, " + tracks.size()
                 + " in view for " + MIN_FRAMES + "+ frames, " + rows + " rows");
+        for (Correction.Pick pick : show) {
+            Person p = find(persons, pick, null);
+            StringBuilder sb = new StringBuilder(p + ":");
+            p.boxes().forEach((f, b) -> sb.append(String.format(Locale.ROOT, "%n  %d %c %.0f,%.0f %.0fx%.0f", f,
+                    p.keys.containsKey(f) ? 'K' : p.interpolated(f) ? 'I' : p.split.contains(f) ? 'S' : 'M', b.x(),
+                    b.y(), b.width(), b.height())));
+            System.out.println(sb);
+        }
         if (csv != null) {
             Files.createDirectories(csv.toAbsolutePath().getParent());
             Files.writeString(csv, csv(tracks), StandardCharsets.UTF_8);
