@@ -35,7 +35,8 @@ public final class ClipSets {
     static ClipSet family() {
         try {
             return (ClipSet) Class.forName(FAMILY_CLASS).getDeclaredConstructor().newInstance();
-        } catch (ClassNotFoundException e) {
+        } catch (ClassNotFoundException | LinkageError e) {
+            // Not compiled, or a stale class file from a build that had the family and this one has not.
             return null;
         } catch (ReflectiveOperationException e) {
             throw new IllegalStateException("cannot make " + FAMILY_CLASS + ": " + e, e);
