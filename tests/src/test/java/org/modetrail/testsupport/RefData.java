@@ -42,15 +42,7 @@ public final class RefData {
 
     /** OpenCV's sample clip vtest.avi (real footage of people walking). */
     public static Path vtest() {
-        List<Path> candidates = new ArrayList<>();
-        String env = System.getenv(VTEST_ENV);
-        if (env != null && !env.isBlank()) {
-            candidates.add(Path.of(env));
-        }
-        candidates.add(Path.of("/").resolve(VTEST_IN_PACKAGE));
-        // Relative to the tests module (where surefire runs) and to the repository root.
-        candidates.add(Path.of("target/refdata/opencv-doc").resolve(VTEST_IN_PACKAGE));
-        candidates.add(Path.of("tests/target/refdata/opencv-doc").resolve(VTEST_IN_PACKAGE));
+        List<Path> candidates = vtestCandidates();
         for (Path p : candidates) {
             if (Files.isRegularFile(p)) {
                 return p.toAbsolutePath();
@@ -60,6 +52,24 @@ public final class RefData {
                 "get it with `apt-get download opencv-doc && dpkg -x opencv-doc_*.deb tests/target/refdata/opencv-doc`"
                         + " or point " + VTEST_ENV + " at it");
         throw new AssertionError("unreachable");
+    }
+
+    /** vtest.avi where {@link #vtest()} looks for it, or empty; for programs (benchmarks), which do not skip. */
+    public static java.util.Optional<Path> vtestIfPresent() {
+        return vtestCandidates().stream().filter(Files::isRegularFile).map(Path::toAbsolutePath).findFirst();
+    }
+
+    private static List<Path> vtestCandidates() {
+        List<Path> candidates = new ArrayList<>();
+        String env = System.getenv(VTEST_ENV);
+        if (env != null && !env.isBlank()) {
+            candidates.add(Path.of(env));
+        }
+        candidates.add(Path.of("/").resolve(VTEST_IN_PACKAGE));
+        // Relative to the tests module (where surefire runs) and to the repository root.
+        candidates.add(Path.of("target/refdata/opencv-doc").resolve(VTEST_IN_PACKAGE));
+        candidates.add(Path.of("tests/target/refdata/opencv-doc").resolve(VTEST_IN_PACKAGE));
+        return candidates;
     }
 
     private static Path tool(String name) {

@@ -1,174 +1,333 @@
 package org.modetrail.trackbench;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.net.URISyntaxException;
+import java.net.URL;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
-import java.util.function.Supplier;
+import java.util.Optional;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.zip.CRC32;
 
-import org.modetrail.evaluation.SingleObjectEvaluation;
-import org.modetrail.model.Box;
-import org.modetrail.picture.PlotFormat;
-import org.modetrail.picture.PlotOptions;
-import org.modetrail.picture.PlotSeries;
-import org.modetrail.picture.Plots;
+import org.modetrail.testsupport.RefData;
 
 /**
- * The benchmark report: on every generated scenario, Modetrail against BoofCV's mean-shift tracker (Comaniciu
- * 2003) and OpenCV's CamShift, all in one run, on success AUC and precision at 20 px (Wu, Lim and Yang 2013), the
- * keyframes per 1000 frames a simulated annotator adds ({@link EffortSimulation}), and median milliseconds per
- * frame beside the time to decode the same clip as H.264 in the same run. Writes {@value #REPORT} (the tables) and
- * a success plot per scenario into the folder given. {@code --quick} runs the first {@value #QUICK_FRAMES} frames
- * of each scenario (CI runs it, so the report cannot rot); the full run takes every frame.
+ * The benchmark report: every tracker on every object of the clip set's clips (generated, encoded as H.264 and
+ * decoded) and of the real footage (vtest.avi with the team's truth, when there), per kind: mean and worst-seed
+ * success AUC, precision at 20 px, frames to the first failure and the share of tracks that end or balloon, false
+ * re-acquisitions, the simulated annotator's keyframes per 1000 frames, and ms per frame beside decoding (see
+ * {@link BenchReportWriter#DEFINITIONS}). Writes {@value #REPORT}, {@value #FIGURES} (one line per kind and
+ * tracker), {@value #OBJECTS} (one line per object run) and a success plot per kind.
  *
  * <pre>
- * mvn -B -q install -DskipTests
- * mvn -B -q -pl tests verify -P bench-report -Dbench.out=$PWD/bench-report [-Dbench.mode=--quick]
+ * mvn -B -q -pl tests verify -P bench-report -Dbench.out=$PWD/bench-report [-Dbench.mode="--quick ..."]
  * </pre>
+ * Options: {@code --seeds tuning|report} (default report), {@code --quick} (CI: {@value #QUICK_SEEDS} seeds per kind,
+ * the first {@value #QUICK_FRAMES} frames, Modetrail and the fast peers), {@code --trackers a,b,...}
+ * ({@link PeerTrackers#keys()}), {@code --clips auto|family|scenarios}, {@code --threads N} (default 2),
+ * {@code --frames N}, {@code --vtest-truth FILE}, {@code --fresh}. Each clip's runs are kept under
+ * {@code OUT/runs/} as they finish; a second run with the same options reuses them (so a long run can be stopped
+ * and resumed) unless {@code --fresh}.
  */
 public final class BenchReport {
     static final String REPORT = "report.md";
-    static final int QUICK_FRAMES = 90;
-    static final List<String> TRACKERS = List.of("Modetrail", "BoofCV mean-shift", "OpenCV CamShift");
+    static final String FIGURES = "figures.csv";
+    static final String OBJECTS = "objects.csv";
+    static final String VTEST = "vtest";
+    static final int QUICK_SEEDS = 2;
+    static final int QUICK_FRAMES = 100;
+    static final int QUICK_VTEST_FRAMES = 150;
 
     private BenchReport() {
     }
 
-    /** One tracker on one scenario. */
-    record Row(String scenario, String tracker, double successAuc, double precision20, double keyframesPer1000,
-               double msPerFrame, double decodeMsPerFrame, double[] successCurve) {
+    /** The command line, checked. */
+    record Options(Path out, boolean quick, ClipSet.Split split, List<String> trackers, String clips,
+                   Optional<Path> vtestTruth, int threads, int frames, boolean fresh) {
+
+        static Options parse(String[] args) {
+            Path out = null;
+            boolean quick = false;
+            ClipSet.Split split = ClipSet.Split.REPORT;
+            String trackers = null;
+            String clips = "auto";
+            Path truth = null;
+            int threads = 2;
+            int frames = -1;
+            boolean fresh = false;
+            for (int i = 0; i < args.length; i++) {
+                String a = args[i];
+                if (a.isBlank()) {
+                    continue;
+                }
+                switch (a) {
+                    case "--out" -> out = Path.of(value(args, ++i, a));
+                    case "--quick" -> quick = true;
+                    case "--fresh" -> fresh = true;
+                    case "--seeds" -> {
+                        String v = value(args, ++i, a);
+                        split = switch (v) {
+                            case "tuning" -> ClipSet.Split.TUNING;
+                            case "report" -> ClipSet.Split.REPORT;
+                            default -> throw new IllegalArgumentException("--seeds takes tuning or report, got '"
+                                    + v + "'");
+                        };
+                    }
+                    case "--trackers" -> trackers = value(args, ++i, a);
+                    case "--clips" -> clips = value(args, ++i, a);
+                    case "--vtest-truth" -> truth = Path.of(value(args, ++i, a));
+                    case "--threads" -> threads = positive(value(args, ++i, a), a);
+                    case "--frames" -> frames = positive(value(args, ++i, a), a);
+                    default -> throw new IllegalArgumentException("unknown argument '" + a + "'; the arguments are "
+                            + "--out DIR [--quick] [--seeds tuning|report] [--trackers a,b,...] "
+                            + "[--clips auto|family|scenarios] [--threads N] [--frames N] [--vtest-truth FILE] "
+                            + "[--fresh]");
+                }
+            }
+            if (out == null) {
+                throw new IllegalArgumentException("give the report's folder with --out DIR");
+            }
+            List<String> keys = trackers != null ? PeerTrackers.parse(trackers)
+                    : quick ? PeerTrackers.quickKeys() : PeerTrackers.keys();
+            return new Options(out, quick, split, keys, clips, Optional.ofNullable(truth), threads,
+                    frames > 0 ? frames : quick ? QUICK_FRAMES : Integer.MAX_VALUE, fresh);
+        }
+
+        private static String value(String[] args, int i, String option) {
+            if (i >= args.length) {
+                throw new IllegalArgumentException(option + " needs a value");
+            }
+            return args[i];
+        }
+
+        private static int positive(String v, String option) {
+            try {
+                int n = Integer.parseInt(v);
+                if (n > 0) {
+                    return n;
+                }
+            } catch (NumberFormatException e) {
+                // below
+            }
+            throw new IllegalArgumentException(option + " takes a whole number above 0, got '" + v + "'");
+        }
+
+        int vtestFrames() {
+            return frames != Integer.MAX_VALUE ? Math.max(frames, quick ? QUICK_VTEST_FRAMES : frames)
+                    : Integer.MAX_VALUE;
+        }
+    }
+
+    /** One clip to run: its group (kind or vtest), seed, and how to get its frames and truth. */
+    private record Job(String group, long seed, String cacheName, ClipWork work) {
+    }
+
+    private interface ClipWork {
+        List<ObjectFigures> run(List<String> trackers, Path scratch) throws Exception;
     }
 
     public static void main(String[] args) throws Exception {
-        Path out = null;
-        boolean quick = false;
-        for (int i = 0; i < args.length; i++) {
-            switch (args[i]) {
-                case "--out" -> out = Path.of(args[++i]);
-                case "--quick" -> quick = true;
-                default -> throw new IllegalArgumentException("unknown argument '" + args[i]
-                        + "'; the arguments are --out DIR [--quick]");
-            }
-        }
-        if (out == null) {
-            throw new IllegalArgumentException("give the report's folder with --out DIR");
-        }
+        Options o = Options.parse(args);
+        run(o);
+        System.out.println("wrote " + o.out().resolve(REPORT));
+    }
+
+    static void run(Options o) throws Exception {
         long t0 = System.nanoTime();
-        List<Row> rows = run(quick);
-        write(rows, out, quick, Duration.ofNanos(System.nanoTime() - t0));
-        System.out.println("wrote " + out.resolve(REPORT));
-    }
+        ClipSet set = ClipSets.named(o.clips());
+        Files.createDirectories(o.out());
+        String setTag = (set instanceof ScenarioClipSet ? "scenarios" : "family") + "-"
+                + o.split().name().toLowerCase(Locale.ROOT) + "-" + (o.frames() == Integer.MAX_VALUE ? "all"
+                        : o.frames() + "f");
+        Path runs = o.out().resolve("runs").resolve(setTag);
+        Files.createDirectories(runs);
+        List<Job> jobs = new ArrayList<>();
+        List<String> groups = new ArrayList<>();
+        int seedsPerKind = 0;
+        for (String kind : set.kinds()) {
+            groups.add(kind);
+            long[] seeds = set.seeds(kind, o.split());
+            int n = o.quick() ? Math.min(QUICK_SEEDS, seeds.length) : seeds.length;
+            seedsPerKind = Math.max(seedsPerKind, n);
+            for (int i = 0; i < n; i++) {
+                long seed = seeds[i];
+                jobs.add(new Job(kind, seed, kind + "-s" + seed, (trackers, scratch) -> {
+                    MultiClip clip = set.clip(kind, seed);
+                    DecodedVideo video = DecodedVideo.encodeAndDecode(clip, o.frames(), set.crf(kind, seed),
+                            scratch);
+                    return ClipBench.run(kind, seed, video, BenchClips.objects(clip, video.frameCount()),
+                            trackers);
+                }));
+            }
+        }
+        String realNote = realFootage(o, jobs, groups);
 
-    static List<Row> run(boolean quick) throws Exception {
-        List<BenchClip> clips = new ArrayList<>();
-        for (BenchClip c : ScenarioClips.all()) {
-            clips.add(quick ? new FirstFrames(c, QUICK_FRAMES) : c);
-        }
-        List<Supplier<BoxTracker>> trackers = TrackBench.trackers();
-        List<EffortSimulation.Filler> fillers = List.of(EffortSimulation.modetrail(),
-                EffortSimulation.restarted("BoofCV", BoofComaniciuTracker::new),
-                EffortSimulation.restarted("CamShift", OpenCvCamShiftTracker::new));
-        Path scratch = Files.createTempDirectory("modetrail-bench-report");
-        List<Row> rows = new ArrayList<>();
-        try {
-            for (Supplier<BoxTracker> make : trackers) {
-                TrackBench.measured(make, clips.get(0)); // JIT warm-up, not reported
-            }
-            for (BenchClip clip : clips) {
-                double decode = DecodeTiming.medianMillis(clip, scratch);
-                RenderedVideo video = new RenderedVideo(clip);
-                for (int k = 0; k < trackers.size(); k++) {
-                    TrackRun run = TrackBench.measured(trackers.get(k), clip);
-                    double effort = EffortSimulation.keyframesPer1000(clip, video, fillers.get(k));
-                    rows.add(new Row(clip.name(), TRACKERS.get(k), run.score().successAuc(),
-                            run.score().precision20(), effort, run.medianMillis(), decode, successCurve(run, clip)));
-                }
-                System.out.printf(Locale.ROOT, "%s done%n", clip.name());
-            }
-        } finally {
-            try (var files = Files.walk(scratch)) {
-                files.sorted(java.util.Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
-            }
-        }
-        return rows;
-    }
-
-    /** The success plot of one run, scored as {@link TrackMetrics} scores it (frame 0 given, half visible on). */
-    static double[] successCurve(TrackRun run, BenchClip clip) {
-        double[] curve = new double[SingleObjectEvaluation.SUCCESS_POINTS];
-        int n = 0;
-        for (int f = 1; f < clip.frameCount(); f++) {
-            TruthBox t = clip.truth(f);
-            if (t.visible() < TrackMetrics.MIN_VISIBLE) {
-                continue;
-            }
-            Box b = run.boxes().get(f);
-            double iou = b.iou(t.box());
-            for (int i = 0; i < curve.length; i++) {
-                if (iou > i / 20.0) {
-                    curve[i]++;
-                }
-            }
-            n++;
-        }
-        for (int i = 0; i < curve.length && n > 0; i++) {
-            curve[i] /= n;
-        }
-        return curve;
-    }
-
-    static void write(List<Row> rows, Path dir, boolean quick, Duration took) throws IOException {
-        Files.createDirectories(dir);
-        StringBuilder md = new StringBuilder();
-        md.append("# Tracking benchmark\n\n");
-        md.append(String.format(Locale.ROOT, "%s run: %s of each generated scenario (seed %d), one keyframe on frame "
-                        + "0 (the true box of object 0); %s %s, %d cores; took %d s.%n%n", quick ? "Quick" : "Full",
-                quick ? "the first " + QUICK_FRAMES + " frames" : "every frame", ScenarioClips.SEED,
+        warmUp(o.trackers());
+        List<ObjectFigures> rows = runAll(jobs, o, runs);
+        List<String> rowTrackers = new ArrayList<>(o.trackers());
+        rowTrackers.add(ClipBench.INTERPOLATION);
+        List<BenchSummary> summaries = BenchSummary.of(rows, groups, rowTrackers);
+        Duration took = Duration.ofNanos(System.nanoTime() - t0);
+        String heading = String.format(Locale.ROOT, "%s run on %s, %s seeds (%d per kind), %s; trackers: %s. "
+                        + "%s %s on %d cores, %d clips at a time; took %d min %d s.", o.quick() ? "Quick" : "Full",
+                set.name(), o.split().name().toLowerCase(Locale.ROOT), seedsPerKind,
+                o.frames() == Integer.MAX_VALUE ? "every frame" : "the first " + o.frames() + " frames of each clip",
+                String.join(", ", o.trackers().stream().map(PeerTrackers::label).toList()),
                 System.getProperty("java.vm.name"), System.getProperty("java.version"),
-                Runtime.getRuntime().availableProcessors(), took.toSeconds()));
-        md.append("| scenario | tracker | success AUC | precision @ 20 px | keyframes / 1000 frames | ms / frame | "
-                + "ms / frame over decoding |\n");
-        md.append("|---|---|---:|---:|---:|---:|---:|\n");
-        for (Row r : rows) {
-            md.append(String.format(Locale.ROOT, "| %s | %s | %.3f | %.3f | %.0f | %.3f | %.2f |%n", r.scenario(),
-                    r.tracker(), r.successAuc(), r.precision20(), r.keyframesPer1000(), r.msPerFrame(),
-                    r.msPerFrame() / r.decodeMsPerFrame()));
-        }
-        md.append("\nDecoding (H.264 through Modetrail's video access, same run), ms per frame: ");
-        List<String> decodes = new ArrayList<>();
-        for (int i = 0; i < rows.size(); i += TRACKERS.size()) {
-            decodes.add(String.format(Locale.ROOT, "%s %.3f", rows.get(i).scenario(), rows.get(i).decodeMsPerFrame()));
-        }
-        md.append(String.join(", ", decodes)).append(".\n\n");
-        md.append("Success AUC: mean over IoU thresholds 0, 0.05, ..., 1 of the fraction of frames whose IoU with the"
-                + " truth is above the threshold (Wu, Lim and Yang 2013); frames under half visible are not scored."
-                + " Keyframes / 1000 frames: a simulated annotator adds the true box at the first frame under IoU"
-                + " 0.5 and lets the tool fill the rest again (Modetrail between keyframes, the references restarted"
-                + " at each). ms / frame: median time of one tracking step after a warm-up pass; the references and"
-                + " Modetrail run on the same rendered frames, decoding is measured separately.\n\n");
-        for (int i = 0; i < rows.size(); i += TRACKERS.size()) {
-            String scenario = rows.get(i).scenario();
-            String file = "success-" + scenario.replaceAll("[^a-z0-9-]", "-") + ".png";
-            md.append("![success plot, ").append(scenario).append("](").append(file).append(")\n");
-            List<PlotSeries> curves = new ArrayList<>();
-            double[] xs = new double[SingleObjectEvaluation.SUCCESS_POINTS];
-            for (int k = 0; k < xs.length; k++) {
-                xs[k] = k / 20.0;
+                Runtime.getRuntime().availableProcessors(), o.threads(), took.toMinutes(), took.toSecondsPart());
+        BenchReportWriter.writeObjects(rows, o.out().resolve(OBJECTS));
+        BenchReportWriter.writeFigures(summaries, o.out().resolve(FIGURES));
+        BenchReportWriter.writeReport(o.out(), heading, summaries, groups, rowTrackers, realNote);
+    }
+
+    /** Adds the real footage's job when its truth and vtest.avi are there; says why not otherwise. */
+    private static String realFootage(Options o, List<Job> jobs, List<String> groups) throws IOException {
+        Path truth = o.vtestTruth().orElse(null);
+        if (truth == null) {
+            URL url = BenchReport.class.getResource(BenchClips.VTEST_TRUTH_RESOURCE);
+            if (url == null) {
+                String note = "Real footage (vtest.avi): rows missing, there is no truth file "
+                        + "tests/src/test/resources" + BenchClips.VTEST_TRUTH_RESOURCE + " yet.";
+                System.out.println(note);
+                return note;
             }
-            int[] colours = {0xE69F00, 0x0072B2, 0x009E73}; // Okabe and Ito's orange, blue, bluish green
-            for (int k = 0; k < TRACKERS.size(); k++) {
-                Row r = rows.get(i + k);
-                curves.add(new PlotSeries(k + 1, String.format(Locale.ROOT, "%s [AUC %.3f]", r.tracker(),
-                        r.successAuc()), colours[k], xs, xs, r.successCurve()));
+            try {
+                truth = Path.of(url.toURI());
+            } catch (URISyntaxException e) {
+                throw new IOException(e);
             }
-            Plots.writeCurves(curves, "Success plot: " + scenario, "IoU threshold", "fraction of frames above it", 0,
-                    1, 0, 1.02, new PlotOptions(800, 600, null, PlotOptions.DEFAULT_MARKERS), PlotFormat.PNG,
-                    dir.resolve(file));
         }
-        Files.writeString(dir.resolve(REPORT), md, StandardCharsets.UTF_8);
+        Optional<Path> vtest = RefData.vtestIfPresent();
+        if (vtest.isEmpty()) {
+            String note = "Real footage (vtest.avi): rows missing, vtest.avi was not found (set "
+                    + RefData.VTEST_ENV + ").";
+            System.out.println(note);
+            return note;
+        }
+        Path truthFile = truth;
+        byte[] bytes = Files.readAllBytes(truthFile);
+        CRC32 crc = new CRC32();
+        crc.update(bytes);
+        int frames = o.vtestFrames();
+        groups.add(VTEST);
+        jobs.add(new Job(VTEST, 0, String.format(Locale.ROOT, "vtest-%08x", crc.getValue()), (trackers, scratch) -> {
+            DecodedVideo video = DecodedVideo.decode(vtest.get(), frames, scratch);
+            return ClipBench.run(VTEST, 0, video, BenchClips.objects(truthFile, video.frameCount()), trackers);
+        }));
+        return "Real footage: vtest.avi (Debian's opencv-doc, 768x576), every pedestrian of the truth file "
+                + truthFile.getFileName() + (frames == Integer.MAX_VALUE ? "" : ", first " + frames + " frames")
+                + "; started on the first frame on which each is at least half visible; a frame without a row for a "
+                + "pedestrian counts as out of view.";
+    }
+
+    /** Every tracker once over a short clip, so the first measured clip does not pay for the JIT. Not reported. */
+    private static void warmUp(List<String> trackers) throws Exception {
+        Path scratch = Files.createTempDirectory("modetrail-bench-warmup");
+        try {
+            ScenarioClipSet set = new ScenarioClipSet();
+            MultiClip clip = set.clip(set.kinds().get(0), 1);
+            DecodedVideo video = DecodedVideo.encodeAndDecode(clip, 40, set.crf(set.kinds().get(0), 1), scratch);
+            ClipBench.run("warm-up", 1, video, BenchClips.objects(clip, video.frameCount()), trackers);
+        } finally {
+            delete(scratch);
+        }
+    }
+
+    private static List<ObjectFigures> runAll(List<Job> jobs, Options o, Path runs) throws Exception {
+        ExecutorService pool = Executors.newFixedThreadPool(o.threads());
+        AtomicInteger done = new AtomicInteger();
+        List<Future<List<ObjectFigures>>> futures = new ArrayList<>();
+        try {
+            for (Job job : jobs) {
+                futures.add(pool.submit(() -> {
+                    long t0 = System.nanoTime();
+                    Path cache = runs.resolve(job.cacheName() + ".csv");
+                    List<ObjectFigures> have = o.fresh() ? List.of() : read(cache);
+                    List<String> missing = o.trackers().stream()
+                            .filter(t -> have.stream().noneMatch(r -> r.tracker().equals(t))).toList();
+                    List<ObjectFigures> rows = new ArrayList<>(have);
+                    if (!missing.isEmpty() || have.isEmpty()) {
+                        Path scratch = Files.createTempDirectory("modetrail-bench");
+                        try {
+                            List<ObjectFigures> fresh = job.work().run(missing, scratch);
+                            rows.removeIf(r -> r.tracker().equals(ClipBench.INTERPOLATION));
+                            rows.addAll(fresh);
+                        } finally {
+                            delete(scratch);
+                        }
+                        write(cache, rows);
+                    }
+                    System.out.printf(Locale.ROOT, "[%d/%d] %s: %.1f s%s%n", done.incrementAndGet(), jobs.size(),
+                            job.cacheName(), (System.nanoTime() - t0) / 1e9, aucLine(rows, o.trackers()));
+                    return rows.stream().filter(r -> o.trackers().contains(r.tracker())
+                            || r.tracker().equals(ClipBench.INTERPOLATION)).toList();
+                }));
+            }
+            List<ObjectFigures> all = new ArrayList<>();
+            for (Future<List<ObjectFigures>> f : futures) {
+                all.addAll(f.get());
+            }
+            return all;
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    private static String aucLine(List<ObjectFigures> rows, List<String> trackers) {
+        StringBuilder sb = new StringBuilder("; AUC");
+        for (String t : trackers) {
+            double m = rows.stream().filter(r -> r.tracker().equals(t) && r.scored() > 0)
+                    .mapToDouble(ObjectFigures::auc).average().orElse(Double.NaN);
+            sb.append(String.format(Locale.ROOT, " %s %.2f", t, m));
+        }
+        return sb.toString();
+    }
+
+    private static List<ObjectFigures> read(Path cache) {
+        if (!Files.isRegularFile(cache)) {
+            return List.of();
+        }
+        try {
+            List<String> lines = Files.readAllLines(cache, StandardCharsets.UTF_8);
+            if (lines.isEmpty() || !lines.get(0).equals(ObjectFigures.HEADER)) {
+                return List.of();
+            }
+            return lines.stream().skip(1).filter(l -> !l.isBlank()).map(ObjectFigures::parse).toList();
+        } catch (IOException | RuntimeException e) {
+            System.out.println("ignoring unreadable " + cache + ": " + e.getMessage());
+            return List.of();
+        }
+    }
+
+    /** Written under a temporary name and moved into place, so a stopped run leaves no half file. */
+    private static void write(Path cache, List<ObjectFigures> rows) throws IOException {
+        StringBuilder sb = new StringBuilder(ObjectFigures.HEADER).append('\n');
+        rows.forEach(r -> sb.append(r.csv()).append('\n'));
+        Path tmp = Files.createTempFile(cache.getParent(), "." + cache.getFileName(), ".part");
+        Files.writeString(tmp, sb, StandardCharsets.UTF_8);
+        Files.move(tmp, cache, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+    }
+
+    private static void delete(Path dir) throws IOException {
+        try (var files = Files.walk(dir)) {
+            files.sorted(Comparator.reverseOrder()).forEach(p -> {
+                try {
+                    Files.deleteIfExists(p);
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+        }
     }
 }

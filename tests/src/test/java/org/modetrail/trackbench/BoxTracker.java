@@ -17,7 +17,12 @@ public interface BoxTracker extends AutoCloseable {
     /** Starts on the object inside {@code box} of the frame last loaded. */
     void start(Box box);
 
-    /** Tracks into the frame last loaded; returns the box it reports there (the last one when it has lost). */
+    /**
+     * Tracks into the frame last loaded; returns the box it reports there, or null for "no box this frame" (a
+     * tracker that reports failure on this frame, as OpenCV's {@code update} returning false or BoofCV's
+     * {@code process} returning false). Modetrail's adapter and CamShift never return null: after a loss they
+     * repeat their last box, and {@link #working} says so.
+     */
     Box track();
 
     /**

@@ -29,8 +29,8 @@ public final class TrackMetrics {
     }
 
     /**
-     * @param tracked    the tracker's box on each frame, indexed by frame; entries at and before {@code start} are
-     *                   ignored
+     * @param tracked    the tracker's box on each frame, indexed by frame, null where it reported none; entries at
+     *                   and before {@code start} are ignored
      * @param truth      the truth on each frame, same indexing
      * @param startFrame the frame the tracker was started on
      */
@@ -49,9 +49,9 @@ public final class TrackMetrics {
                 continue;
             }
             Box b = tracked.get(f);
-            double iou = b.iou(t.box());
+            double iou = b == null ? 0 : b.iou(t.box()); // no box this frame: IoU 0, never precise
             ious[scored++] = iou;
-            if (b.centreDistance(t.box()) <= PRECISION_PX) {
+            if (b != null && b.centreDistance(t.box()) <= PRECISION_PX) {
                 precise++;
             }
             if (iou == 0 && untilFailure < 0) {
