@@ -1,0 +1,316 @@
+package org.modetrail.demo.scenario;
+
+import static org.modetrail.demo.scenario.FamilyDesign.anyFloor;
+import static org.modetrail.demo.scenario.FamilyDesign.constant;
+import static org.modetrail.demo.scenario.FamilyDesign.headings;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.modetrail.demo.Rgb;
+import org.modetrail.demo.scenario.FamilyDesign.Setting;
+import org.modetrail.demo.scenario.FamilyFloor.Style;
+
+/**
+ * The kinds seen from above a floor or a bench: {@link FamilyKind#SMALL_ERRATIC}, {@link FamilyKind#LOOKALIKES} and
+ * {@link FamilyKind#PUSHED}. Sizes in px at 640 x 480, speeds in px per frame.
+ */
+final class TabletopPlans {
+
+    private static final int[] PALE_COLOURS = {Rgb.pack(252, 236, 150), Rgb.pack(255, 190, 150),
+        Rgb.pack(160, 210, 255), Rgb.pack(200, 250, 190), Rgb.pack(250, 250, 246)};
+    private static final int[] TOOL_COLOURS = {Rgb.pack(150, 156, 166), Rgb.pack(228, 120, 34),
+        Rgb.pack(40, 40, 46), Rgb.pack(230, 200, 40)};
+
+    private TabletopPlans() {
+    }
+
+    static FamilyPlan smallErratic(Setting s) {
+        int n = s.frames();
+        FamilyFloor floor = s.chance(0.75) ? FamilyDesign.floor(s, Style.PALE_NOISY)
+                : FamilyDesign.floor(s, Style.SPECKLE);
+        double a = s.uniform(10, 30) / 2;
+        double b = a * s.uniform(0.45, 0.9);
+        boolean dark = s.chance(0.6);
+        int colour = dark ? FamilyDesign.tint(s, s.integer(34, 80), 16)
+                : PALE_COLOURS[s.random().nextInt(PALE_COLOURS.length)];
+        List<FamilyBody> bodies = new ArrayList<>();
+        Route.Area area = Route.Area.inside(s.width(), s.height(), a * 1.2 + 4, a * 1.2 + 4);
+        Route r = FamilyPaths.darting(s.random(), n, area, 2, s.uniform(4.5, 8), 2, 8, 0.15);
+        double[] length = FamilyDesign.pulse(s, n, a, s.uniform(0, 0.1), s.uniform(6, 20));
+        bodies.add(new FamilyBody(FamilyDesign.look(s, colour, a, b, 0), BodyTrack.of(r.x(), r.y(), length,
+                constant(n, b), headings(r.x(), r.y(), 0.7, s.uniform(-Math.PI, Math.PI))),
+                FamilyBody.Shadow.BENEATH));
+        int extras = s.integer(1, 2);
+        for (int k = 1; k <= extras; k++) {
+            double ea = s.uniform(5, 15);
+            double eb = ea * s.uniform(0.5, 0.9);
+            int c = dark ? (s.chance(0.5) ? FamilyDesign.tint(s, s.integer(90, 140), 20) : FamilyDesign.saturated(s))
+                    : FamilyDesign.tint(s, s.integer(40, 90), 20);
+            Route.Area ar = Route.Area.inside(s.width(), s.height(), ea + 4, ea + 4);
+            Route e = Routes.smooth(s.random(), n, ar, 0.3, s.uniform(1, 3));
+            bodies.add(new FamilyBody(FamilyDesign.look(s, c, ea, eb, k), BodyTrack.of(e.x(), e.y(), constant(n, ea),
+                    constant(n, eb), headings(e.x(), e.y(), 0.2, 0)), FamilyBody.Shadow.BENEATH));
+        }
+        List<Blotch> stains = new ArrayList<>();
+        int count = s.integer(0, 4);
+        for (int k = 0; k < count; k++) {
+            double rx = s.uniform(4, 14);
+            stains.add(new Blotch(s.uniform(20, s.width() - 20), s.uniform(20, s.height() - 20), rx,
+                    rx * s.uniform(0.5, 1), s.uniform(0, Math.PI), Rgb.offset(floor.base(), -s.integer(20, 50)),
+                    s.subSeed(50 + k)));
+        }
+        return s.plan(bodies, floor, stains, List.of(), FamilyDesign.mildLighting(s), ShadowBand.NONE,
+                new SoftShadows(s.uniform(-0.8, 0.8), s.uniform(0.3, 1), s.uniform(0.15, 0.3)));
+    }
+
+    /**
+     * Object 0 wanders; object 1, of its colour family, meets it twice: first passing over it (object 1 in front),
+     * then, after a detour to one side, under it. Object 2 circles a loop in two colours; object 3, in about half
+     * the clips, wanders in a colour of its own.
+     */
+    static FamilyPlan lookalikes(Setting s) {
+        int n = s.frames();
+        FamilyFloor floor = anyFloor(s, Style.TILES, Style.SPECKLE, Style.GRADIENT, Style.PAVING);
+        double a = s.uniform(20, 60) / 2;
+        double b = a * s.uniform(0.5, 0.8);
+        double a2 = a * s.uniform(0.92, 1.08);
+        int base = FamilyDesign.saturated(s);
+        Route.Area area = Route.Area.inside(s.width(), s.height(), a * 1.2 + 6, a * 1.2 + 6);
+        Route ra = Routes.smooth(s.random(), n, area, 1.5, s.uniform(3, 4.5));
+        int t1 = (int) (n * s.uniform(0.2, 0.32));
+        int t2 = (int) (n * s.uniform(0.62, 0.78));
+        int tm = (t1 + t2) / 2;
+        Route rb = null;
+        double offset = s.uniform(40, 110);
+        double turn1 = Math.toRadians(s.uniform(60, 120)) * (s.chance(0.5) ? 1 : -1);
+        double turn2 = Math.toRadians(s.uniform(60, 120)) * (s.chance(0.5) ? 1 : -1);
+        double speed = s.uniform(1.5, 3.5);
+        double side = s.chance(0.5) ? 1 : -1;
+        for (int attempt = 0; attempt < 4; attempt++) {
+            rb = crossingRoute(ra, area, n, t1, tm, t2, offset * side, turn1, turn2, speed);
+            if (maxStep(rb) <= 5.8) {
+                break;
+            }
+            offset /= 2;
+            speed *= 0.8;
+        }
+        double[] depthA = constant(n, 0);
+        double[] depthB = new double[n];
+        for (int f = 0; f < n; f++) {
+            depthB[f] = f < tm ? 1 : -1;
+        }
+        List<FamilyBody> bodies = new ArrayList<>();
+        bodies.add(new FamilyBody(FamilyDesign.look(s, base, a, b, 0), track(ra, a, b, depthA, 0.12),
+                FamilyBody.Shadow.BENEATH));
+        bodies.add(new FamilyBody(FamilyDesign.look(s, FamilyDesign.near(s, base, 16), a2, b * a2 / a, 1),
+                track(rb, a2, b * a2 / a, depthB, 0.12), FamilyBody.Shadow.BENEATH));
+        double ca = s.uniform(20, 60) / 2;
+        double cb = ca * s.uniform(0.6, 1);
+        double rx = s.uniform(50, 130);
+        double ry = s.uniform(50, 130);
+        double mx = Math.max(1, (area.maxX() - area.minX()) / 2 - 4);
+        double my = Math.max(1, (area.maxY() - area.minY()) / 2 - 4);
+        rx = Math.min(rx, mx);
+        ry = Math.min(ry, my);
+        Route rc = FamilyPaths.loop(s.random(), n, s.uniform(area.minX() + rx, area.maxX() - rx),
+                s.uniform(area.minY() + ry, area.maxY() - ry), rx, ry, s.uniform(1.5, 4));
+        int front = FamilyDesign.saturated(s);
+        int back = s.chance(0.3) ? Rgb.pack(238, 236, 228) : FamilyDesign.saturated(s);
+        if (Math.abs(Rgb.red(front) - Rgb.red(back)) + Math.abs(Rgb.blue(front) - Rgb.blue(back)) < 80) {
+            back = Rgb.pack(255 - Rgb.red(front), 255 - Rgb.green(front), 255 - Rgb.blue(front));
+        }
+        bodies.add(new FamilyBody(FigureLook.halves(front, back, s.subSeed(2)), track(rc, ca, cb, constant(n, 0.5),
+                0.2), FamilyBody.Shadow.BENEATH));
+        if (s.chance(0.5)) {
+            double da = s.uniform(12, 30);
+            Route rd = Routes.smooth(s.random(), n, Route.Area.inside(s.width(), s.height(), da * 1.2 + 4,
+                    da * 1.2 + 4), 1, 3);
+            bodies.add(new FamilyBody(FamilyDesign.look(s, FamilyDesign.saturated(s), da, da * 0.6, 3),
+                    track(rd, da, da * 0.6, constant(n, 0.2), 0.12), FamilyBody.Shadow.BENEATH));
+        }
+        return s.plan(bodies, floor, List.of(), List.of(), FamilyDesign.mildLighting(s), ShadowBand.NONE,
+                new SoftShadows(s.uniform(-0.8, 0.8), s.uniform(0.3, 1), s.uniform(0.2, 0.35)));
+    }
+
+    /**
+     * Meets {@code a} at {@code t1} and {@code t2} coming in at an angle, with a detour to one side at {@code tm}:
+     * cubic Hermite keys, positions kept inside {@code area}.
+     */
+    private static Route crossingRoute(Route a, Route.Area area, int n, int t1, int tm, int t2, double offset,
+                                       double turn1, double turn2, double speed) {
+        double[] p1 = {a.x()[t1], a.y()[t1]};
+        double[] p2 = {a.x()[t2], a.y()[t2]};
+        double d1 = StrictMath.atan2(a.y()[t1 + 1] - a.y()[t1 - 1], a.x()[t1 + 1] - a.x()[t1 - 1]) + turn1;
+        double d2 = StrictMath.atan2(a.y()[t2 + 1] - a.y()[t2 - 1], a.x()[t2 + 1] - a.x()[t2 - 1]) + turn2;
+        double len = Math.max(1e-9, Math.hypot(p2[0] - p1[0], p2[1] - p1[1]));
+        double mx = FamilyPaths.clamp((p1[0] + p2[0]) / 2 - (p2[1] - p1[1]) / len * offset, area.minX(), area.maxX());
+        double my = FamilyPaths.clamp((p1[1] + p2[1]) / 2 + (p2[0] - p1[0]) / len * offset, area.minY(), area.maxY());
+        double vx1 = speed * StrictMath.cos(d1);
+        double vy1 = speed * StrictMath.sin(d1);
+        double vx2 = speed * StrictMath.cos(d2);
+        double vy2 = speed * StrictMath.sin(d2);
+        double[][] keys = {
+            {0, FamilyPaths.clamp(p1[0] - vx1 * t1, area.minX(), area.maxX()),
+                FamilyPaths.clamp(p1[1] - vy1 * t1, area.minY(), area.maxY()), vx1, vy1},
+            {t1, p1[0], p1[1], vx1, vy1},
+            {tm, mx, my, (p2[0] - p1[0]) / (t2 - t1), (p2[1] - p1[1]) / (t2 - t1)},
+            {t2, p2[0], p2[1], vx2, vy2},
+            {n - 1, FamilyPaths.clamp(p2[0] + vx2 * (n - 1 - t2), area.minX(), area.maxX()),
+                FamilyPaths.clamp(p2[1] + vy2 * (n - 1 - t2), area.minY(), area.maxY()), vx2, vy2}};
+        Route r = Routes.keyed(n, keys);
+        for (int f = 0; f < n; f++) {
+            r.x()[f] = FamilyPaths.clamp(r.x()[f], area.minX(), area.maxX());
+            r.y()[f] = FamilyPaths.clamp(r.y()[f], area.minY(), area.maxY());
+        }
+        return r;
+    }
+
+    static double maxStep(Route r) {
+        double m = 0;
+        for (int f = 1; f < r.frames(); f++) {
+            m = Math.max(m, Math.hypot(r.x()[f] - r.x()[f - 1], r.y()[f] - r.y()[f - 1]));
+        }
+        return m;
+    }
+
+    private static BodyTrack track(Route r, double a, double b, double[] depth, double maxTurn) {
+        int n = r.frames();
+        boolean[] shown = new boolean[n];
+        java.util.Arrays.fill(shown, true);
+        return new BodyTrack(r.x(), r.y(), constant(n, a), constant(n, b), headings(r.x(), r.y(), maxTurn,
+                StrictMath.atan2(r.y()[Math.min(n - 1, 1)] - r.y()[0], r.x()[Math.min(n - 1, 1)] - r.x()[0])),
+                depth, shown);
+    }
+
+    /**
+     * A small object at rest, pushed 15 to 40 px in one frame, sliding 12 % and 3 % of that in the next two, turned
+     * a little by each push. With a pusher (about half the clips), a tool-like body comes in along the push's line
+     * to touch the object in the frame before the push, moves with it, and withdraws out of the frame.
+     */
+    static FamilyPlan pushed(Setting s) {
+        int n = s.frames();
+        FamilyFloor floor = anyFloor(s, Style.TILES, Style.SPECKLE, Style.PALE_NOISY, Style.PAVING);
+        double a = s.uniform(14, 40) / 2;
+        double b = a * s.uniform(0.5, 0.9);
+        int colour = s.chance(0.5) ? FamilyDesign.saturated(s) : FamilyDesign.tint(s, s.integer(40, 80), 14);
+        boolean pusher = s.chance(0.5);
+        int pushes = pusher ? s.integer(2, 3) : s.integer(2, 5);
+        Route.Area area = Route.Area.inside(s.width(), s.height(), a * 1.2 + 8, a * 1.2 + 8);
+        double[] x = new double[n];
+        double[] y = new double[n];
+        double[] h = new double[n];
+        double px = s.uniform(area.minX() + 0.25 * (area.maxX() - area.minX()), area.maxX()
+                - 0.25 * (area.maxX() - area.minX()));
+        double py = s.uniform(area.minY() + 0.25 * (area.maxY() - area.minY()), area.maxY()
+                - 0.25 * (area.maxY() - area.minY()));
+        double heading = s.uniform(-Math.PI, Math.PI);
+        int spacing = (n - 40) / pushes;
+        int[] at = new int[pushes];
+        double[][] dirs = new double[pushes][];
+        for (int k = 0; k < pushes; k++) {
+            at[k] = 20 + k * spacing + s.integer(0, Math.max(0, spacing / 3));
+        }
+        int next = 0;
+        double[] slide = {1, 0.12, 0.03};
+        for (int f = 0; f < n; f++) {
+            if (next < pushes && f == at[next]) {
+                double d = s.uniform(15, 40);
+                double u = s.uniform(-Math.PI, Math.PI);
+                for (int attempt = 0; attempt < 24 && !area.contains(px + 1.2 * d * StrictMath.cos(u),
+                        py + 1.2 * d * StrictMath.sin(u)); attempt++) {
+                    u = s.uniform(-Math.PI, Math.PI);
+                }
+                if (!area.contains(px + 1.2 * d * StrictMath.cos(u), py + 1.2 * d * StrictMath.sin(u))) {
+                    u = StrictMath.atan2(area.centreY() - py, area.centreX() - px);
+                }
+                dirs[next] = new double[] {u, d, s.uniform(-0.6, 0.6), px, py, heading};
+                next++;
+            }
+            for (int k = 0; k < next; k++) {
+                int since = f - at[k];
+                if (since >= 0 && since < slide.length) {
+                    double step = dirs[k][1] * slide[since];
+                    px = FamilyPaths.clamp(px + step * StrictMath.cos(dirs[k][0]), area.minX(), area.maxX());
+                    py = FamilyPaths.clamp(py + step * StrictMath.sin(dirs[k][0]), area.minY(), area.maxY());
+                    heading = Routes.wrap(heading + dirs[k][2] * slide[since]);
+                }
+            }
+            x[f] = px;
+            y[f] = py;
+            h[f] = heading;
+        }
+        List<FamilyBody> bodies = new ArrayList<>();
+        bodies.add(new FamilyBody(FamilyDesign.look(s, colour, a, b, 0), BodyTrack.of(x, y, constant(n, a),
+                constant(n, b), h), FamilyBody.Shadow.BENEATH));
+        if (pusher) {
+            double ta = s.uniform(30, 60);
+            double tb = s.uniform(4, 8);
+            bodies.add(new FamilyBody(FamilyDesign.look(s, TOOL_COLOURS[s.random().nextInt(TOOL_COLOURS.length)],
+                    ta, tb, 1), pusherTrack(s, x, y, a, b, h, at, dirs, ta, tb), FamilyBody.Shadow.BENEATH));
+        }
+        return s.plan(bodies, floor, List.of(), List.of(), FamilyDesign.mildLighting(s), ShadowBand.NONE,
+                new SoftShadows(s.uniform(-0.8, 0.8), s.uniform(0.3, 1), s.uniform(0.15, 0.3)));
+    }
+
+    /**
+     * The tool: hidden off the frame but for the pushes whose approach and withdrawal fit between the others; it
+     * comes in along the push's line at up to 20 px a frame, touches the object's rim in the frame before the push,
+     * moves with it and goes back the way it came; {@code ta} and {@code tb} are its semi-axes.
+     */
+    private static BodyTrack pusherTrack(Setting s, double[] ox, double[] oy, double a, double b, double[] oh,
+                                         int[] at, double[][] dirs, double ta, double tb) {
+        int n = ox.length;
+        double[] x = new double[n];
+        double[] y = new double[n];
+        double[] h = new double[n];
+        boolean[] shown = new boolean[n];
+        java.util.Arrays.fill(x, -4 * ta);
+        java.util.Arrays.fill(y, -4 * ta);
+        int free = 0;
+        for (int k = 0; k < at.length; k++) {
+            double u = dirs[k][0];
+            double cu = StrictMath.cos(u);
+            double su = StrictMath.sin(u);
+            int contact = at[k] - 1;
+            double rel = u - oh[contact];
+            double rim = a * Math.abs(StrictMath.cos(rel)) + b * Math.abs(StrictMath.sin(rel));
+            double cx = ox[contact] - cu * (rim + ta + 1);
+            double cy = oy[contact] - su * (rim + ta + 1);
+            // Back along the line until the tool is wholly outside the frame.
+            double away = 0;
+            while (away < 4000 && insideFrame(cx - cu * away, cy - su * away, ta + tb + 2, s)) {
+                away += 4;
+            }
+            int approach = Math.max(s.integer(8, 16), (int) Math.ceil(away / 20));
+            int withdraw = Math.max(s.integer(8, 16), (int) Math.ceil(away / 20));
+            int from = contact - approach;
+            int to = at[k] + withdraw;
+            if (from < free || to >= n) {
+                continue;
+            }
+            for (int f = from; f <= to; f++) {
+                double back;
+                if (f <= contact) {
+                    double t = (double) (contact - f) / approach;
+                    back = away * t * t * (3 - 2 * t);
+                } else if (f == at[k]) {
+                    back = -dirs[k][1];
+                } else {
+                    double t = (double) (f - at[k]) / withdraw;
+                    back = -dirs[k][1] + (away + dirs[k][1]) * t * t * (3 - 2 * t);
+                }
+                x[f] = cx - cu * back;
+                y[f] = cy - su * back;
+                h[f] = u;
+                shown[f] = true;
+            }
+            free = to + 1;
+        }
+        double[] depth = constant(n, 1);
+        return new BodyTrack(x, y, constant(n, ta), constant(n, tb), h, depth, shown);
+    }
+
+    private static boolean insideFrame(double x, double y, double reach, Setting s) {
+        return x + reach > 0 && y + reach > 0 && x - reach < s.width() && y - reach < s.height();
+    }
+}
