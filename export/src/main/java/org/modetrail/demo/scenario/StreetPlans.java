@@ -32,6 +32,8 @@ final class StreetPlans {
     private static final double MAX_VEHICLE_STEP = 38;
     /** Narrowest a vehicle is shown: beyond that it is lost in the distance. */
     private static final double MIN_VEHICLE_WIDTH = 8;
+    /** Most a vehicle's width changes over its time in view, wholly in the frame. */
+    static final double MAX_GROWTH = 10;
 
     private StreetPlans() {
     }
@@ -67,13 +69,17 @@ final class StreetPlans {
             }
             double vz = s.uniform(0.025, 0.06) * (approaching ? -1 : 1);
             BodyTrack t = null;
-            for (int attempt = 0; attempt < 8; attempt++) {
+            for (int attempt = 0; attempt < 12; attempt++) {
                 t = vehicle(s, road, n, lane, a0, b0, start, z0, vz);
                 double step = maxShownStep(t, s);
-                if (step <= MAX_VEHICLE_STEP) {
+                if (step > MAX_VEHICLE_STEP) {
+                    vz *= MAX_VEHICLE_STEP / step * 0.97;
+                } else if (k == 0 && !t.shown(0)) {
+                    // The target must be in view at frame 0: start it nearer, within its x10 span.
+                    z0 *= 0.85;
+                } else {
                     break;
                 }
-                vz *= MAX_VEHICLE_STEP / step * 0.97;
             }
             int paint = PAINT[s.random().nextInt(PAINT.length)];
             ObjectLook look = new ObjectLook(paint, Rgb.scale(paint, 0.82), Rgb.mix(paint, Rgb.pack(40, 44, 52),
@@ -106,6 +112,16 @@ final class StreetPlans {
             depth[f] = contact;
             boolean visible = x[f] + a[f] > 0 && x[f] - a[f] < s.width() && y[f] - b[f] < s.height();
             shown[f] = f >= start && 2 * a[f] >= MIN_VEHICLE_WIDTH && visible;
+        }
+        // Within a tenth of its largest size in view: the kind's growth and shrinking stay within x10.
+        double largest = 0;
+        for (int f = 0; f < n; f++) {
+            if (shown[f] && y[f] + b[f] <= s.height()) {
+                largest = Math.max(largest, 2 * a[f]);
+            }
+        }
+        for (int f = 0; f < n; f++) {
+            shown[f] &= 2 * a[f] >= largest / MAX_GROWTH;
         }
         return new BodyTrack(x, y, a, b, constant(n, 0), depth, shown);
     }
