@@ -147,6 +147,22 @@ final class FamilyDesign {
         return h;
     }
 
+    /**
+     * A wandering path ({@link Routes#smooth}) that starts at least {@code clear} px from ({@code x0}, {@code y0}),
+     * redrawn up to 20 times: a second body must not hide the target in the frame a tracker starts on.
+     */
+    static Route wanderAway(Setting s, Route.Area area, double minSpeed, double maxSpeed, double x0, double y0,
+                            double clear) {
+        Route r = null;
+        for (int attempt = 0; attempt < 20; attempt++) {
+            r = Routes.smooth(s.random(), s.frames(), area, minSpeed, maxSpeed);
+            if (Math.hypot(r.x()[0] - x0, r.y()[0] - y0) >= clear) {
+                break;
+            }
+        }
+        return r;
+    }
+
     /** {@code value} for every frame. */
     static double[] constant(int n, double value) {
         double[] v = new double[n];

@@ -28,7 +28,7 @@ public enum FamilyKind {
     /**
      * A small object, 14 to 40 px, at rest and then pushed 15 to 40 px in one motion-blurred frame, sliding a little
      * and resting again, two to five times; in about half the clips a tool-like body of another colour comes in from
-     * the edge beside it before each push and withdraws after. 640 x 480.
+     * the edge beside it before each push and withdraws after, otherwise another object rests nearby. 640 x 480.
      */
     PUSHED(14, 40, 40, ScenarioKind.FAST_MOTION),
 
@@ -53,13 +53,14 @@ public enum FamilyKind {
 
     /**
      * A large target, 80 to 250 px, moving fast (15 to 40 px a frame) with abrupt turns and strong motion blur, at
-     * 1280 x 720 or 1920 x 1080; sometimes a second large body. Shorter clips (150 to 250 frames).
+     * 1280 x 720 or 1920 x 1080, and a second large body wandering slower. Shorter clips (150 to 250 frames).
      */
     FAST_LARGE(80, 250, 40, ScenarioKind.FAST_MOTION),
 
     /**
      * A target of 30 to 90 px among stains of its own colours, passing behind pillars (fully hidden behind some)
-     * while the light dims or brightens with a colour cast and a soft band of shade sweeps across. 640 x 480.
+     * while the light dims or brightens with a colour cast and a soft band of shade sweeps across; a second body,
+     * often of the target's colours. 640 x 480.
      */
     LIGHTING_OCCLUSION(30, 90, 6, ScenarioKind.LIGHTING_DRIFT);
 

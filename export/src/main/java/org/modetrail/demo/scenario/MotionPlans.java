@@ -44,8 +44,8 @@ final class MotionPlans {
         bodies.add(awayAndBack(s, n));
         if (s.chance(0.4)) {
             double ea = s.uniform(12, 30);
-            Route r = Routes.smooth(s.random(), n, Route.Area.inside(s.width(), s.height(), ea * 1.2 + 4,
-                    ea * 1.2 + 4), 0.5, 2.5);
+            Route r = FamilyDesign.wanderAway(s, Route.Area.inside(s.width(), s.height(), ea * 1.2 + 4,
+                    ea * 1.2 + 4), 0.5, 2.5, path[0][0], path[1][0], 1.3 * (a + ea));
             bodies.add(new FamilyBody(FamilyDesign.look(s, FamilyDesign.saturated(s), ea, ea * 0.6, 2),
                     BodyTrack.of(r.x(), r.y(), constant(n, ea), constant(n, ea * 0.6), headings(r.x(), r.y(), 0.15,
                     0)), FamilyBody.Shadow.BENEATH));
@@ -104,7 +104,7 @@ final class MotionPlans {
                 new BodyTrack(x, y, a, b, heading, depth, shown), FamilyBody.Shadow.BENEATH);
     }
 
-    /** Object 0 darts at 15 to 40 px a frame with abrupt turns; a second large body in about half the clips. */
+    /** Object 0 darts at 15 to 40 px a frame with abrupt turns; a second large body wanders at 3 to 10. */
     static FamilyPlan fastLarge(Setting s) {
         int n = s.frames();
         FamilyFloor floor = FamilyDesign.anyFloor(s, Style.TILES, Style.SPECKLE, Style.GRADIENT, Style.PAVING);
@@ -116,10 +116,10 @@ final class MotionPlans {
         bodies.add(new FamilyBody(FamilyDesign.look(s, FamilyDesign.saturated(s), a, b, 0), BodyTrack.of(r.x(), r.y(),
                 constant(n, a), constant(n, b), headings(r.x(), r.y(), 0.3, s.uniform(-Math.PI, Math.PI))),
                 FamilyBody.Shadow.BENEATH));
-        if (s.chance(0.5)) {
+        {
             double da = s.uniform(30, 75);
-            Route d = Routes.smooth(s.random(), n, Route.Area.inside(s.width(), s.height(), da * 1.2 + 4,
-                    da * 1.2 + 4), 3, 10);
+            Route d = FamilyDesign.wanderAway(s, Route.Area.inside(s.width(), s.height(), da * 1.2 + 4,
+                    da * 1.2 + 4), 3, 10, r.x()[0], r.y()[0], 1.3 * (a + da));
             bodies.add(new FamilyBody(FamilyDesign.look(s, FamilyDesign.saturated(s), da, da * 0.7, 1),
                     BodyTrack.of(d.x(), d.y(), constant(n, da), constant(n, da * 0.7), headings(d.x(), d.y(), 0.1,
                     0)), FamilyBody.Shadow.BENEATH));
@@ -131,7 +131,8 @@ final class MotionPlans {
     /**
      * Object 0 wanders among stains of its colour family (some on its way, some beside it), passes behind one to
      * three pillars, wide enough to hide it wholly in about 60 % of cases; the light dims (or, in 30 % of clips,
-     * brightens) by up to half with a warm-to-cool or cool-to-warm cast, and a band of shade sweeps across.
+     * brightens) by up to half with a warm-to-cool or cool-to-warm cast, and a band of shade sweeps across; a
+     * second body wanders, of the target's colour family in half the clips.
      */
     static FamilyPlan lightingOcclusion(Setting s) {
         int n = s.frames();
@@ -163,11 +164,13 @@ final class MotionPlans {
             }
         }
         List<Blotch> stains = clutter(s, r, a, b, base);
-        if (s.chance(0.5)) {
+        {
+            // A second body: of the target's colour family in half the clips, of its own colour otherwise.
             double da = a * s.uniform(0.8, 1.2);
-            Route d = Routes.smooth(s.random(), n, Route.Area.inside(w, s.height(), da * 1.2 + 4, da * 1.2 + 4),
-                    1, 3);
-            bodies.add(new FamilyBody(FamilyDesign.look(s, FamilyDesign.near(s, base, 35), da, da * b / a, 1),
+            Route d = FamilyDesign.wanderAway(s, Route.Area.inside(w, s.height(), da * 1.2 + 4, da * 1.2 + 4), 1, 3,
+                    r.x()[0], r.y()[0], 1.3 * (a + da));
+            int colour = s.chance(0.5) ? FamilyDesign.near(s, base, 35) : FamilyDesign.saturated(s);
+            bodies.add(new FamilyBody(FamilyDesign.look(s, colour, da, da * b / a, 1),
                     BodyTrack.of(d.x(), d.y(), constant(n, da), constant(n, da * b / a), headings(d.x(), d.y(), 0.1,
                     0)), FamilyBody.Shadow.BENEATH));
         }

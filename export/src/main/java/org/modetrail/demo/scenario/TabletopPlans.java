@@ -47,7 +47,7 @@ final class TabletopPlans {
             int c = dark ? (s.chance(0.5) ? FamilyDesign.tint(s, s.integer(90, 140), 20) : FamilyDesign.saturated(s))
                     : FamilyDesign.tint(s, s.integer(40, 90), 20);
             Route.Area ar = Route.Area.inside(s.width(), s.height(), ea + 4, ea + 4);
-            Route e = Routes.smooth(s.random(), n, ar, 0.3, s.uniform(1, 3));
+            Route e = FamilyDesign.wanderAway(s, ar, 0.3, s.uniform(1, 3), r.x()[0], r.y()[0], 1.3 * (a + ea) + 4);
             bodies.add(new FamilyBody(FamilyDesign.look(s, c, ea, eb, k), BodyTrack.of(e.x(), e.y(), constant(n, ea),
                     constant(n, eb), headings(e.x(), e.y(), 0.2, 0)), FamilyBody.Shadow.BENEATH));
         }
@@ -123,8 +123,8 @@ final class TabletopPlans {
                 0.2), FamilyBody.Shadow.BENEATH));
         if (s.chance(0.5)) {
             double da = s.uniform(12, 30);
-            Route rd = Routes.smooth(s.random(), n, Route.Area.inside(s.width(), s.height(), da * 1.2 + 4,
-                    da * 1.2 + 4), 1, 3);
+            Route rd = FamilyDesign.wanderAway(s, Route.Area.inside(s.width(), s.height(), da * 1.2 + 4,
+                    da * 1.2 + 4), 1, 3, ra.x()[0], ra.y()[0], 1.3 * (a + da));
             bodies.add(new FamilyBody(FamilyDesign.look(s, FamilyDesign.saturated(s), da, da * 0.6, 3),
                     track(rd, da, da * 0.6, constant(n, 0.2), 0.12), FamilyBody.Shadow.BENEATH));
         }
@@ -247,6 +247,23 @@ final class TabletopPlans {
             double tb = s.uniform(4, 8);
             bodies.add(new FamilyBody(FamilyDesign.look(s, TOOL_COLOURS[s.random().nextInt(TOOL_COLOURS.length)],
                     ta, tb, 1), pusherTrack(s, x, y, a, b, h, at, dirs, ta, tb), FamilyBody.Shadow.BENEATH));
+        }
+        // Another object resting on the bench, of a size and colour of its own, clear of the target's path.
+        double ra = s.uniform(7, 20);
+        for (int attempt = 0; attempt < 40; attempt++) {
+            double rx = s.uniform(area.minX(), area.maxX());
+            double ry = s.uniform(area.minY(), area.maxY());
+            boolean clear = true;
+            for (int f = 0; f < n && clear; f++) {
+                clear = Math.hypot(rx - x[f], ry - y[f]) > a * 1.3 + ra * 1.3 + 30;
+            }
+            if (clear) {
+                int c = s.chance(0.5) ? FamilyDesign.saturated(s) : FamilyDesign.tint(s, s.integer(40, 170), 20);
+                bodies.add(new FamilyBody(FamilyDesign.look(s, c, ra, ra * s.uniform(0.5, 0.9), 2),
+                        BodyTrack.of(constant(n, rx), constant(n, ry), constant(n, ra), constant(n, ra * 0.7),
+                        constant(n, s.uniform(-Math.PI, Math.PI))), FamilyBody.Shadow.BENEATH));
+                break;
+            }
         }
         return s.plan(bodies, floor, List.of(), List.of(), FamilyDesign.mildLighting(s), ShadowBand.NONE,
                 new SoftShadows(s.uniform(-0.8, 0.8), s.uniform(0.3, 1), s.uniform(0.15, 0.3)));
