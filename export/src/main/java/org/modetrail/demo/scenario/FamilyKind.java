@@ -34,9 +34,10 @@ public enum FamilyKind {
 
     /**
      * Vehicle-like bodies on a road converging to a vanishing point, approaching (growing up to ten times) and
-     * receding (shrinking to a tenth), entering and leaving the frame; 8 to 260 px wide. 640 x 480.
+     * receding (shrinking to a tenth), entering and leaving the frame; 8 to 260 px wide, up to 24 px a frame wholly
+     * in view and up to 38 as they leave across the bottom. 640 x 480.
      */
-    PERSPECTIVE(8, 260, 40, ScenarioKind.SCALE_CHANGE),
+    PERSPECTIVE(8, 260, 24, ScenarioKind.SCALE_CHANGE),
 
     /**
      * Upright people-like bodies (width a third to a half of the height, 30 to 140 px tall, head, top and bottom in

@@ -62,7 +62,7 @@ final class MotionPlans {
         double horizon = -h * s.uniform(0.15, 0.35);
         double nearY = h - a1 - 8;
         double farY = Math.max(horizon + (nearY - horizon) / 3, a1 / 3 + 4);
-        double v0 = s.uniform(1.5, 3);
+        double v0 = s.uniform(3, 5);
         double[] x = new double[n];
         double[] y = new double[n];
         double[] a = new double[n];

@@ -64,8 +64,8 @@ final class TabletopPlans {
     }
 
     /**
-     * Object 0 wanders; object 1, of its colour family, meets it twice: first passing over it (object 1 in front),
-     * then, after a detour to one side, under it. Object 2 circles a loop in two colours; object 3, in about half
+     * Object 0 wanders; object 1, of its colour family, meets it twice at an angle: first passing over it (object 1
+     * in front), then, after a swing to one side, under it. Object 2 circles a loop in two colours; object 3, in about half
      * the clips, wanders in a colour of its own.
      */
     static FamilyPlan lookalikes(Setting s) {
@@ -76,24 +76,11 @@ final class TabletopPlans {
         double a2 = a * s.uniform(0.92, 1.08);
         int base = FamilyDesign.saturated(s);
         Route.Area area = Route.Area.inside(s.width(), s.height(), a * 1.2 + 6, a * 1.2 + 6);
-        Route ra = Routes.smooth(s.random(), n, area, 1.5, s.uniform(3, 4.5));
-        int t1 = (int) (n * s.uniform(0.2, 0.32));
-        int t2 = (int) (n * s.uniform(0.62, 0.78));
+        Route ra = Routes.smooth(s.random(), n, area, 1.5, s.uniform(2.5, 3.8));
+        int t1 = (int) (n * s.uniform(0.15, 0.28));
+        int t2 = (int) (n * s.uniform(0.68, 0.85));
         int tm = (t1 + t2) / 2;
-        Route rb = null;
-        double offset = s.uniform(40, 110);
-        double turn1 = Math.toRadians(s.uniform(60, 120)) * (s.chance(0.5) ? 1 : -1);
-        double turn2 = Math.toRadians(s.uniform(60, 120)) * (s.chance(0.5) ? 1 : -1);
-        double speed = s.uniform(1.5, 3.5);
-        double side = s.chance(0.5) ? 1 : -1;
-        for (int attempt = 0; attempt < 4; attempt++) {
-            rb = crossingRoute(ra, area, n, t1, tm, t2, offset * side, turn1, turn2, speed);
-            if (maxStep(rb) <= 5.8) {
-                break;
-            }
-            offset /= 2;
-            speed *= 0.8;
-        }
+        Route rb = crossingRoute(ra, area, t1, t2, s.uniform(50, 120), s.chance(0.5) ? 1 : -1);
         double[] depthA = constant(n, 0);
         double[] depthB = new double[n];
         for (int f = 0; f < n; f++) {
@@ -133,36 +120,83 @@ final class TabletopPlans {
     }
 
     /**
-     * Meets {@code a} at {@code t1} and {@code t2} coming in at an angle, with a detour to one side at {@code tm}:
-     * cubic Hermite keys, positions kept inside {@code area}.
+     * Meets {@code a} at {@code t1} and {@code t2} at an angle: between them it follows {@code a} displaced across
+     * the chord from {@code a(t1)} to {@code a(t2)} by {@code offset * sin(pi (t - t1) / (t2 - t1))}, so it crosses
+     * {@code a} at both instants with a sideways speed {@code offset * pi / (t2 - t1)}; before and after it keeps
+     * its crossing velocity in a straight line (held at the edge of {@code area}). The swing goes to the side with
+     * more room, stays in the area, and is cut until no step exceeds 5.8 px.
      */
-    private static Route crossingRoute(Route a, Route.Area area, int n, int t1, int tm, int t2, double offset,
-                                       double turn1, double turn2, double speed) {
-        double[] p1 = {a.x()[t1], a.y()[t1]};
-        double[] p2 = {a.x()[t2], a.y()[t2]};
-        double d1 = StrictMath.atan2(a.y()[t1 + 1] - a.y()[t1 - 1], a.x()[t1 + 1] - a.x()[t1 - 1]) + turn1;
-        double d2 = StrictMath.atan2(a.y()[t2 + 1] - a.y()[t2 - 1], a.x()[t2 + 1] - a.x()[t2 - 1]) + turn2;
-        double len = Math.max(1e-9, Math.hypot(p2[0] - p1[0], p2[1] - p1[1]));
-        double mx = FamilyPaths.clamp((p1[0] + p2[0]) / 2 - (p2[1] - p1[1]) / len * offset, area.minX(), area.maxX());
-        double my = FamilyPaths.clamp((p1[1] + p2[1]) / 2 + (p2[0] - p1[0]) / len * offset, area.minY(), area.maxY());
-        double vx1 = speed * StrictMath.cos(d1);
-        double vy1 = speed * StrictMath.sin(d1);
-        double vx2 = speed * StrictMath.cos(d2);
-        double vy2 = speed * StrictMath.sin(d2);
-        double[][] keys = {
-            {0, FamilyPaths.clamp(p1[0] - vx1 * t1, area.minX(), area.maxX()),
-                FamilyPaths.clamp(p1[1] - vy1 * t1, area.minY(), area.maxY()), vx1, vy1},
-            {t1, p1[0], p1[1], vx1, vy1},
-            {tm, mx, my, (p2[0] - p1[0]) / (t2 - t1), (p2[1] - p1[1]) / (t2 - t1)},
-            {t2, p2[0], p2[1], vx2, vy2},
-            {n - 1, FamilyPaths.clamp(p2[0] + vx2 * (n - 1 - t2), area.minX(), area.maxX()),
-                FamilyPaths.clamp(p2[1] + vy2 * (n - 1 - t2), area.minY(), area.maxY()), vx2, vy2}};
-        Route r = Routes.keyed(n, keys);
-        for (int f = 0; f < n; f++) {
-            r.x()[f] = FamilyPaths.clamp(r.x()[f], area.minX(), area.maxX());
-            r.y()[f] = FamilyPaths.clamp(r.y()[f], area.minY(), area.maxY());
+    private static Route crossingRoute(Route a, Route.Area area, int t1, int t2, double offset, double side) {
+        int n = a.frames();
+        double span = t2 - t1;
+        double cx = a.x()[t2] - a.x()[t1];
+        double cy = a.y()[t2] - a.y()[t1];
+        double len = Math.max(1e-9, Math.hypot(cx, cy));
+        double[] nrm = {-cy / len, cx / len};
+        double[] room = new double[2];
+        for (int k = 0; k < 2; k++) {
+            double sign = k == 0 ? side : -side;
+            double lo = offset;
+            for (int f = t1; f <= t2; f++) {
+                double w = StrictMath.sin(Math.PI * (f - t1) / span);
+                if (w > 0.05) {
+                    lo = Math.min(lo, clearance(area, a.x()[f], a.y()[f], sign * nrm[0], sign * nrm[1]) / w);
+                }
+            }
+            room[k] = lo;
+        }
+        double sign = room[0] >= room[1] ? side : -side;
+        double swing = Math.max(room[0], room[1]);
+        Route r = null;
+        for (int attempt = 0; attempt < 12; attempt++) {
+            r = swung(a, area, t1, t2, nrm[0] * sign * swing, nrm[1] * sign * swing);
+            if (maxStep(r) <= 5.8) {
+                break;
+            }
+            swing *= 0.85;
         }
         return r;
+    }
+
+    private static Route swung(Route a, Route.Area area, int t1, int t2, double ox, double oy) {
+        int n = a.frames();
+        double span = t2 - t1;
+        double[] xs = new double[n];
+        double[] ys = new double[n];
+        for (int f = t1; f <= t2; f++) {
+            double w = StrictMath.sin(Math.PI * (f - t1) / span);
+            xs[f] = a.x()[f] + ox * w;
+            ys[f] = a.y()[f] + oy * w;
+        }
+        double vx1 = xs[t1 + 1] - xs[t1];
+        double vy1 = ys[t1 + 1] - ys[t1];
+        double vx2 = xs[t2] - xs[t2 - 1];
+        double vy2 = ys[t2] - ys[t2 - 1];
+        for (int f = 0; f < t1; f++) {
+            xs[f] = FamilyPaths.clamp(xs[t1] - vx1 * (t1 - f), area.minX(), area.maxX());
+            ys[f] = FamilyPaths.clamp(ys[t1] - vy1 * (t1 - f), area.minY(), area.maxY());
+        }
+        for (int f = t2 + 1; f < n; f++) {
+            xs[f] = FamilyPaths.clamp(xs[t2] + vx2 * (f - t2), area.minX(), area.maxX());
+            ys[f] = FamilyPaths.clamp(ys[t2] + vy2 * (f - t2), area.minY(), area.maxY());
+        }
+        return new Route(xs, ys);
+    }
+
+    /** How far from ({@code x}, {@code y}) along the unit direction ({@code dx}, {@code dy}) {@code area} ends. */
+    private static double clearance(Route.Area area, double x, double y, double dx, double dy) {
+        double t = Double.MAX_VALUE;
+        if (dx > 1e-9) {
+            t = Math.min(t, (area.maxX() - x) / dx);
+        } else if (dx < -1e-9) {
+            t = Math.min(t, (area.minX() - x) / dx);
+        }
+        if (dy > 1e-9) {
+            t = Math.min(t, (area.maxY() - y) / dy);
+        } else if (dy < -1e-9) {
+            t = Math.min(t, (area.minY() - y) / dy);
+        }
+        return Math.max(0, t);
     }
 
     static double maxStep(Route r) {
