@@ -44,19 +44,52 @@ final class Backdrop {
         } else {
             Arrays.fill(floor, ScenarioConfig.FLAT_FLOOR);
         }
+        int[] span = preparePosts(posts, config.seed());
+        this.postFirst = span[0];
+        this.postLast = span[1];
+    }
+
+    /**
+     * A backdrop over a floor painted elsewhere ({@link FamilyFloor}), taken over as it is: blotches are painted
+     * into it, then the posts are made ready. With {@code texture} false the floor is {@link
+     * ScenarioConfig#FLAT_FLOOR} and there are no blotches, as for the first constructor.
+     */
+    Backdrop(int width, int height, int[] paintedFloor, boolean texture, List<Blotch> blotches, List<Post> posts,
+             long seed) {
+        if (paintedFloor.length != width * height) {
+            throw new IllegalArgumentException("floor must hold " + width + " x " + height + " pixels");
+        }
+        this.width = width;
+        this.height = height;
+        this.floor = paintedFloor;
+        this.postColour = new int[width * height];
+        this.postColumn = new boolean[width];
+        if (texture) {
+            for (Blotch b : blotches) {
+                paintBlotch(b, seed, 1);
+            }
+        } else {
+            Arrays.fill(floor, ScenarioConfig.FLAT_FLOOR);
+        }
+        int[] span = preparePosts(posts, seed);
+        this.postFirst = span[0];
+        this.postLast = span[1];
+    }
+
+    /** Paints every post's columns; returns the first and last post column ({width, -1} when none). */
+    private int[] preparePosts(List<Post> posts, long seed) {
         int first = width;
         int last = -1;
         for (Post p : posts) {
             for (int i = 0; i < width; i++) {
                 if (p.coversColumn(i)) {
-                    paintPostColumn(p, i, config.seed());
+                    paintPostColumn(p, i, seed);
                     first = Math.min(first, i);
                     last = Math.max(last, i);
                 }
             }
         }
-        this.postFirst = first;
-        this.postLast = last;
+        return new int[] {first, last};
     }
 
     /** The floor, row-major; callers must not change it. */

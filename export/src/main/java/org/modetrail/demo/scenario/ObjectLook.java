@@ -19,7 +19,7 @@ import org.modetrail.demo.Rgb;
  * @param seed        places the patches and the grain
  */
 record ObjectLook(int base, int accent, int band, double semiLength, double semiWidth, boolean bandAcross,
-                  long seed) {
+                  long seed) implements BodyLook {
 
     /** Share of patch cells in the accent colour. */
     private static final double ACCENT_SHARE = 0.3;
@@ -36,7 +36,8 @@ record ObjectLook(int base, int accent, int band, double semiLength, double semi
      * Colour at a body point given relative to the body ({@code nu, nv} in -1..1 along and across it) with
      * superellipse value {@code q} (0 at the centre, 1 at the rim).
      */
-    int colour(double nu, double nv, double q) {
+    @Override
+    public int colour(double nu, double nv, double q) {
         // Lit from above: the middle of the dome is brighter than the rim.
         double light = 0.7 + 0.3 * Math.sqrt(1 - q);
         long cell = NoiseHash.hash(seed, (long) Math.floor((nu + 1) * 4), (long) Math.floor((nv + 1) * 3));

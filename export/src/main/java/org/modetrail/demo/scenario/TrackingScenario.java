@@ -6,7 +6,16 @@ package org.modetrail.demo.scenario;
  */
 public interface TrackingScenario {
 
+    /**
+     * The difficulty exercised; a scenario of the family ({@link ScenarioFamily}) gives the single-difficulty kind
+     * nearest its situation ({@link FamilyKind#nearest()}), and its {@link #name()} says which it is.
+     */
     ScenarioKind kind();
+
+    /** Name for file names and table rows: the kind's slug, and for a family scenario {@code KIND-SEED}. */
+    default String name() {
+        return kind().slug();
+    }
 
     int width();
 
@@ -16,7 +25,7 @@ public interface TrackingScenario {
 
     int frameCount();
 
-    /** Objects with ground truth: 1, or 2 for {@link ScenarioKind#CROSSING}. */
+    /** Objects with ground truth: 1, or 2 for {@link ScenarioKind#CROSSING}; 1 to 9 in the family. */
     int objectCount();
 
     /**
