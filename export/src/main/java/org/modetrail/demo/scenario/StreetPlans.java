@@ -27,6 +27,8 @@ final class StreetPlans {
         Rgb.pack(160, 140, 100)};
     private static final int[] SKIN = {Rgb.pack(224, 180, 150), Rgb.pack(190, 140, 110), Rgb.pack(140, 96, 70),
         Rgb.pack(96, 66, 50)};
+    private static final int[] HAIR = {Rgb.pack(30, 24, 20), Rgb.pack(70, 48, 30), Rgb.pack(150, 120, 80),
+        Rgb.pack(120, 120, 118)};
     private static final int[] PILLARS = {Rgb.pack(150, 148, 140), Rgb.pack(60, 64, 70), Rgb.pack(214, 212, 204)};
     /** Fastest a vehicle may move in the image, px per frame: the kind's stated 40 less a margin. */
     private static final double MAX_VEHICLE_STEP = 38;
@@ -260,7 +262,8 @@ final class StreetPlans {
         int top = dark ? DARK_TOPS[s.random().nextInt(DARK_TOPS.length)] : TOPS[s.random().nextInt(TOPS.length)];
         int bottom = dark || s.chance(0.4) ? DARK_BOTTOMS[s.random().nextInt(DARK_BOTTOMS.length)]
                 : BOTTOMS[s.random().nextInt(BOTTOMS.length)];
-        FigureLook look = new FigureLook(SKIN[s.random().nextInt(SKIN.length)], s.uniform(0.11, 0.15),
+        FigureLook look = new FigureLook(SKIN[s.random().nextInt(SKIN.length)], HAIR[s.random().nextInt(HAIR.length)],
+                s.uniform(0.11, 0.15),
                 FamilyDesign.near(s, top, 8), FamilyDesign.near(s, bottom, 6), s.uniform(-0.15, 0.1), s.subSeed(k));
         boolean[] shown = new boolean[n];
         Arrays.fill(shown, true);
