@@ -198,6 +198,10 @@ final class StreetPlans {
             int size = s.integer(2, 3);
             double gx = s.uniform(0.15 * w, 0.85 * w);
             double gFeet = s.uniform(0.45 * h, 0.85 * h);
+            // Clear of the target in frame 0, where a tracker is started on it.
+            for (int attempt = 0; attempt < 20 && Math.abs(gx - x0) < tallest * 0.75 + target.b(0) + 8; attempt++) {
+                gx = s.uniform(0.15 * w, 0.85 * w);
+            }
             double gap = s.uniform(0.5, 0.9);
             for (int g = 0; g < size; g++) {
                 double scale = (gFeet - horizon) / (h - horizon);
@@ -211,6 +215,11 @@ final class StreetPlans {
             boolean inside = s.chance(0.3);
             double side = s.chance(0.5) ? -1 : 1;
             double x = inside ? s.uniform(0.1 * w, 0.9 * w) : (side < 0 ? -40 : w + 40);
+            if (inside && Math.abs(x - x0) < tallest * 0.3 + target.b(0) + 8) {
+                // Would stand in front of or behind the target in frame 0: come in from the side instead.
+                inside = false;
+                x = side < 0 ? -40 : w + 40;
+            }
             int start = inside ? 0 : s.integer(0, (int) (0.7 * n));
             bodies.add(person(s, n, x, feet, -side, s.uniform(0.8, 2.4), start, n, 0, horizon, tallest,
                     bodies.size()));
