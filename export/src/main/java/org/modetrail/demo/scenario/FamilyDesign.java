@@ -149,7 +149,9 @@ final class FamilyDesign {
 
     /**
      * A wandering path ({@link Routes#smooth}) that starts at least {@code clear} px from ({@code x0}, {@code y0}),
-     * redrawn up to 20 times: a second body must not hide the target in the frame a tracker starts on.
+     * redrawn up to 20 times, each draw also tried mirrored left to right ({@link Routes#smooth} starts in the left
+     * part of its area, as the target's path may): a second body must not hide the target in the frame a tracker
+     * starts on.
      */
     static Route wanderAway(Setting s, Route.Area area, double minSpeed, double maxSpeed, double x0, double y0,
                             double clear) {
@@ -157,7 +159,14 @@ final class FamilyDesign {
         for (int attempt = 0; attempt < 20; attempt++) {
             r = Routes.smooth(s.random(), s.frames(), area, minSpeed, maxSpeed);
             if (Math.hypot(r.x()[0] - x0, r.y()[0] - y0) >= clear) {
-                break;
+                return r;
+            }
+            double[] mirrored = new double[r.frames()];
+            for (int f = 0; f < mirrored.length; f++) {
+                mirrored[f] = area.minX() + area.maxX() - r.x()[f];
+            }
+            if (Math.hypot(mirrored[0] - x0, r.y()[0] - y0) >= clear) {
+                return new Route(mirrored, r.y());
             }
         }
         return r;

@@ -1,8 +1,6 @@
 package org.modetrail.demo.scenario;
 
 import java.util.List;
-import org.modetrail.demo.NoiseHash;
-import org.modetrail.demo.Rgb;
 
 /**
  * A scenario of the family rendered from its {@link FamilyPlan}: floor, the bodies' soft shadows, the bodies back to
@@ -23,8 +21,7 @@ import org.modetrail.demo.Rgb;
 final class FamilyScenario implements TrackingScenario {
 
     static final int ALL_OBJECTS = -1;
-    private static final int GAIN_ONE = 1 << 12;
-    private static final int OPAQUE = 0xFF000000;
+    private static final int GAIN_ONE = FamilyPainter.GAIN_ONE;
     /** Most exposure samples per body and frame: 40 px of travel at one sample per pixel. */
     private static final int MAX_SAMPLES = 41;
 
@@ -43,6 +40,7 @@ final class FamilyScenario implements TrackingScenario {
     private final int[] samples;
     /** Per frame: red, green and blue gain in 1/4096. */
     private final int[] gains;
+    private final FamilyPainter painter;
 
     FamilyScenario(FamilyPlan plan, FamilyRendering rendering) {
         this.plan = plan;
@@ -95,6 +93,7 @@ final class FamilyScenario implements TrackingScenario {
                 }
             }
         }
+        this.painter = new FamilyPainter(plan, rendering, textures, gains);
     }
 
     @Override
@@ -164,20 +163,20 @@ final class FamilyScenario implements TrackingScenario {
         if (rendering.shadows() && plan.shadows().darkness() > 0) {
             for (int k = 0; k < objects; k++) {
                 if ((objectMask & (1 << k)) != 0 && track(k).shown(frame)) {
-                    paintShadow(rgb, plan.bodies().get(k), frame);
+                    painter.paintShadow(rgb, plan.bodies().get(k), frame);
                 }
             }
         }
         for (int rank = 0; rank < objects; rank++) {
             int k = order[frame * objects + rank];
             if ((objectMask & (1 << k)) != 0 && track(k).shown(frame)) {
-                paintBody(rgb, k, frame);
+                painter.paintBody(rgb, k, frame, exposureSamples(k, frame));
             }
         }
         if (posts) {
             backdrop.paintPosts(rgb);
         }
-        finish(frame, rgb);
+        painter.finish(frame, rgb);
     }
 
     @Override
@@ -282,193 +281,6 @@ final class FamilyScenario implements TrackingScenario {
         out[3] = maxY;
         out[4] = pixels;
         out[5] = seen;
-    }
-
-    /** The body as the time average of its exposure samples over what lies under it. */
-    private void paintBody(int[] rgb, int k, int frame) {
-        BodyTrack track = track(k);
-        BodyTexture texture = textures[k];
-        int n = exposureSamples(k, frame);
-        double[] cx = new double[n];
-        double[] cy = new double[n];
-        double[] cos = new double[n];
-        double[] sin = new double[n];
-        double[] a = new double[n];
-        double[] b = new double[n];
-        int[] box = new int[4 * n];
-        int[] level = new int[n];
-        int i0 = width;
-        int j0 = height;
-        int i1 = -1;
-        int j1 = -1;
-        for (int s = 0; s < n; s++) {
-            // Odd n: the middle sample is the frame's instant exactly.
-            Pose p = n == 1 ? track.pose(frame) : track.at(frame + plan.shutter() * ((s + 0.5) / n - 0.5));
-            cx[s] = p.cx();
-            cy[s] = p.cy();
-            cos[s] = p.cos();
-            sin[s] = p.sin();
-            a[s] = p.a();
-            b[s] = p.b();
-            level[s] = texture.level(p.a());
-            box[4 * s] = Math.max(0, p.firstColumn());
-            box[4 * s + 1] = Math.max(0, p.firstRow());
-            box[4 * s + 2] = Math.min(width - 1, p.lastColumn());
-            box[4 * s + 3] = Math.min(height - 1, p.lastRow());
-            i0 = Math.min(i0, box[4 * s]);
-            j0 = Math.min(j0, box[4 * s + 1]);
-            i1 = Math.max(i1, box[4 * s + 2]);
-            j1 = Math.max(j1, box[4 * s + 3]);
-        }
-        int half = n / 2;
-        for (int j = j0; j <= j1; j++) {
-            double py = j + 0.5;
-            for (int i = i0; i <= i1; i++) {
-                int covered = 0;
-                int sr = 0;
-                int sg = 0;
-                int sb = 0;
-                for (int s = 0; s < n; s++) {
-                    if (i < box[4 * s] || i > box[4 * s + 2] || j < box[4 * s + 1] || j > box[4 * s + 3]) {
-                        continue;
-                    }
-                    // The same arithmetic as Pose.q, so coverage agrees with the truth to the last bit.
-                    double dx = i + 0.5 - cx[s];
-                    double dy = py - cy[s];
-                    double nu = (dx * cos[s] + dy * sin[s]) / a[s];
-                    double nv = (-dx * sin[s] + dy * cos[s]) / b[s];
-                    double u2 = nu * nu;
-                    double v2 = nv * nv;
-                    if (u2 * u2 + v2 * v2 < 1) {
-                        int c = texture.at(level[s], nu, nv);
-                        sr += (c >>> 16) & 0xFF;
-                        sg += (c >>> 8) & 0xFF;
-                        sb += c & 0xFF;
-                        covered++;
-                    }
-                }
-                if (covered == 0) {
-                    continue;
-                }
-                int at = j * width + i;
-                if (covered < n) {
-                    int under = rgb[at];
-                    int rest = n - covered;
-                    sr += rest * ((under >>> 16) & 0xFF);
-                    sg += rest * ((under >>> 8) & 0xFF);
-                    sb += rest * (under & 0xFF);
-                }
-                rgb[at] = ((sr + half) / n) << 16 | ((sg + half) / n) << 8 | ((sb + half) / n);
-            }
-        }
-    }
-
-    /** A soft shadow: light multiplied by {@code 1 - darkness} at the core, fading to none at the rim. */
-    private void paintShadow(int[] rgb, FamilyBody body, int frame) {
-        BodyTrack t = body.track();
-        SoftShadows light = plan.shadows();
-        double cx;
-        double cy;
-        double ra;
-        double rb;
-        double cos;
-        double sin;
-        Pose p = t.pose(frame);
-        if (body.shadow() == FamilyBody.Shadow.BENEATH) {
-            double lift = Math.min(p.a(), p.b()) * 0.5;
-            cx = p.cx() + light.dx() * lift;
-            cy = p.cy() + light.dy() * lift;
-            ra = p.a() * 1.08;
-            rb = p.b() * 1.15;
-            cos = p.cos();
-            sin = p.sin();
-        } else if (body.shadow() == FamilyBody.Shadow.FEET) {
-            double tall = p.halfExtentY();
-            cx = p.cx() + light.dx() * tall * 0.5;
-            cy = p.cy() + tall * 0.96;
-            ra = p.halfExtentX() * 1.4 + Math.abs(light.dx()) * tall * 0.5;
-            rb = Math.max(1.5, tall * 0.12);
-            cos = 1;
-            sin = 0;
-        } else {
-            return;
-        }
-        double reach = Math.max(ra, rb) + 1;
-        int i0 = Math.max(0, (int) Math.floor(cx - reach));
-        int i1 = Math.min(width - 1, (int) Math.ceil(cx + reach));
-        int j0 = Math.max(0, (int) Math.floor(cy - reach));
-        int j1 = Math.min(height - 1, (int) Math.ceil(cy + reach));
-        double dark = light.darkness();
-        for (int j = j0; j <= j1; j++) {
-            for (int i = i0; i <= i1; i++) {
-                double dx = i + 0.5 - cx;
-                double dy = j + 0.5 - cy;
-                double u = (dx * cos + dy * sin) / ra;
-                double v = (-dx * sin + dy * cos) / rb;
-                double r2 = u * u + v * v;
-                if (r2 >= 1) {
-                    continue;
-                }
-                // Penumbra over the outer half of the radius.
-                double x = Math.min(1, (1 - Math.sqrt(r2)) * 2);
-                int keep = (int) Math.round((1 - dark * x * x * (3 - 2 * x)) * GAIN_ONE);
-                int at = j * width + i;
-                int c = rgb[at];
-                rgb[at] = (((((c >>> 16) & 0xFF) * keep) >> 12) << 16) | (((((c >>> 8) & 0xFF) * keep) >> 12) << 8)
-                        | (((c & 0xFF) * keep) >> 12);
-            }
-        }
-    }
-
-    /**
-     * Lighting gains times the band of shade, then zero-mean sensor noise (a brightness offset per pixel and a
-     * weaker one per channel, a function of seed, frame and pixel only), then opaque alpha.
-     */
-    private void finish(int frame, int[] rgb) {
-        int gr = gains[frame * 3];
-        int gg = gains[frame * 3 + 1];
-        int gb = gains[frame * 3 + 2];
-        ShadowBand band = rendering.lighting() ? plan.band() : ShadowBand.NONE;
-        boolean banded = !band.isNone();
-        double bandCos = StrictMath.cos(band.angle());
-        double bandSin = StrictMath.sin(band.angle());
-        double centre = band.centre(frame);
-        int amplitude = rendering.noise() ? plan.sensorNoise() : 0;
-        int span = 2 * amplitude + 1;
-        int chromaHalf = amplitude / 2;
-        int chromaSpan = 2 * chromaHalf + 1;
-        long seed = NoiseHash.mix(plan.seed() * 64 + plan.kind().ordinal()) ^ 0x5E75L;
-        int half = GAIN_ONE / 2;
-        for (int j = 0; j < height; j++) {
-            double rowOffset = (j + 0.5) * bandSin - centre;
-            for (int i = 0; i < width; i++) {
-                int at = j * width + i;
-                int c = rgb[at];
-                int r = (c >>> 16) & 0xFF;
-                int g = (c >>> 8) & 0xFF;
-                int b = c & 0xFF;
-                int pr = gr;
-                int pg = gg;
-                int pb = gb;
-                if (banded) {
-                    int f = (int) Math.round(band.factor((i + 0.5) * bandCos + rowOffset) * GAIN_ONE);
-                    pr = (pr * f + half) >> 12;
-                    pg = (pg * f + half) >> 12;
-                    pb = (pb * f + half) >> 12;
-                }
-                r = (r * pr + half) >> 12;
-                g = (g * pg + half) >> 12;
-                b = (b * pb + half) >> 12;
-                if (amplitude > 0) {
-                    long h = NoiseHash.hash(seed, frame, at);
-                    int luma = (int) ((h >>> 40) % span) - amplitude;
-                    r += luma + (int) ((h & 0xFF) % chromaSpan) - chromaHalf;
-                    g += luma + (int) (((h >>> 8) & 0xFF) % chromaSpan) - chromaHalf;
-                    b += luma + (int) (((h >>> 16) & 0xFF) % chromaSpan) - chromaHalf;
-                }
-                rgb[at] = OPAQUE | Rgb.pack(r, g, b);
-            }
-        }
     }
 
     /** The bodies, for tests. */

@@ -27,6 +27,8 @@ final class StreetPlans {
         Rgb.pack(160, 140, 100)};
     private static final int[] SKIN = {Rgb.pack(224, 180, 150), Rgb.pack(190, 140, 110), Rgb.pack(140, 96, 70),
         Rgb.pack(96, 66, 50)};
+    private static final int[] HAIR = {Rgb.pack(30, 24, 20), Rgb.pack(70, 48, 30), Rgb.pack(150, 120, 80),
+        Rgb.pack(120, 120, 118)};
     private static final int[] PILLARS = {Rgb.pack(150, 148, 140), Rgb.pack(60, 64, 70), Rgb.pack(214, 212, 204)};
     /** Fastest a vehicle may move in the image, px per frame: the kind's stated 40 less a margin. */
     private static final double MAX_VEHICLE_STEP = 38;
@@ -196,6 +198,10 @@ final class StreetPlans {
             int size = s.integer(2, 3);
             double gx = s.uniform(0.15 * w, 0.85 * w);
             double gFeet = s.uniform(0.45 * h, 0.85 * h);
+            // Clear of the target in frame 0, where a tracker is started on it.
+            for (int attempt = 0; attempt < 20 && Math.abs(gx - x0) < tallest * 0.75 + target.b(0) + 8; attempt++) {
+                gx = s.uniform(0.15 * w, 0.85 * w);
+            }
             double gap = s.uniform(0.5, 0.9);
             for (int g = 0; g < size; g++) {
                 double scale = (gFeet - horizon) / (h - horizon);
@@ -209,6 +215,11 @@ final class StreetPlans {
             boolean inside = s.chance(0.3);
             double side = s.chance(0.5) ? -1 : 1;
             double x = inside ? s.uniform(0.1 * w, 0.9 * w) : (side < 0 ? -40 : w + 40);
+            if (inside && Math.abs(x - x0) < tallest * 0.3 + target.b(0) + 8) {
+                // Would stand in front of or behind the target in frame 0: come in from the side instead.
+                inside = false;
+                x = side < 0 ? -40 : w + 40;
+            }
             int start = inside ? 0 : s.integer(0, (int) (0.7 * n));
             bodies.add(person(s, n, x, feet, -side, s.uniform(0.8, 2.4), start, n, 0, horizon, tallest,
                     bodies.size()));
@@ -260,7 +271,8 @@ final class StreetPlans {
         int top = dark ? DARK_TOPS[s.random().nextInt(DARK_TOPS.length)] : TOPS[s.random().nextInt(TOPS.length)];
         int bottom = dark || s.chance(0.4) ? DARK_BOTTOMS[s.random().nextInt(DARK_BOTTOMS.length)]
                 : BOTTOMS[s.random().nextInt(BOTTOMS.length)];
-        FigureLook look = new FigureLook(SKIN[s.random().nextInt(SKIN.length)], s.uniform(0.11, 0.15),
+        FigureLook look = new FigureLook(SKIN[s.random().nextInt(SKIN.length)], HAIR[s.random().nextInt(HAIR.length)],
+                s.uniform(0.11, 0.15),
                 FamilyDesign.near(s, top, 8), FamilyDesign.near(s, bottom, 6), s.uniform(-0.15, 0.1), s.subSeed(k));
         boolean[] shown = new boolean[n];
         Arrays.fill(shown, true);

@@ -25,7 +25,7 @@ public interface TrackingScenario {
 
     int frameCount();
 
-    /** Objects with ground truth: 1, or 2 for {@link ScenarioKind#CROSSING}; 1 to 9 in the family. */
+    /** Objects with ground truth: 1, or 2 for {@link ScenarioKind#CROSSING}; 2 to 8 in the family. */
     int objectCount();
 
     /**

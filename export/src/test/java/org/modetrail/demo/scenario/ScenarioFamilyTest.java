@@ -93,6 +93,12 @@ class ScenarioFamilyTest {
             assertEquals(Set.of("640x480"), sizes);
         }
         assertTrue(lengths.size() >= 8, kind + ": clip lengths vary, " + lengths);
+        for (long seed : ScenarioFamily.reportSeeds(kind)) {
+            // The benchmark starts a tracker on frame 0 of report clips too.
+            TrackingScenario s = ScenarioFamily.create(kind, seed);
+            assertTrue(s.truth(0, 0).visible() >= 0.8 && s.objectCount() >= 2, s.name() + ": target seen at frame 0, "
+                    + s.truth(0, 0).visible() + ", objects " + s.objectCount());
+        }
     }
 
     @ParameterizedTest
