@@ -26,6 +26,9 @@ public final class Tune {
         if (scale != null) {
             c = c.withScale(org.modetrail.tracking.ScaleMethod.valueOf(scale));
         }
+        if (System.getProperty("tune.contrast") != null) {
+            c = c.toBuilder().requireContrast(Boolean.getBoolean("tune.contrast")).build();
+        }
         if (Boolean.getBoolean("tune.noredetect")) {
             c = c.toBuilder().reDetect(false).build();
         }

@@ -62,6 +62,7 @@ public final class MeanShiftTracker implements Tracker {
     private final IlluminationCompensation light;
     private final PartialOcclusion occlusion;
     private final CentreSurroundScale surround;
+    private final KernelHistogram surroundNow;
     private double coreW = 1;
     private double coreH = 1;
     private double startAspect;
@@ -100,6 +101,7 @@ public final class MeanShiftTracker implements Tracker {
         observed = new KernelHistogram(bins);
         light = config.compensateLighting() ? new IlluminationCompensation() : null;
         occlusion = new PartialOcclusion(bins);
+        surroundNow = new KernelHistogram(bins);
         surround = new CentreSurroundScale(0.3, 0.1);
     }
 
@@ -125,7 +127,7 @@ public final class MeanShiftTracker implements Tracker {
         occlusion.build(image, start);
         likelihood.update(model.target, model.background.values);
         moments.reset(image, likelihood, start);
-        if (config.scale() == ScaleMethod.CENTRE_SURROUND || config.scale() == ScaleMethod.MOMENTS) {
+        if (config.scale() == ScaleMethod.CENTRE_SURROUND || config.scale() == ScaleMethod.CHECKED_MOMENTS) {
             load(frame, start, 1.3 * CentreSurroundScale.SURROUND / 2 + 0.05, 2);
             surround.calibrate(image, likelihood, start);
             coreW = surround.coreWidth;
@@ -204,7 +206,7 @@ public final class MeanShiftTracker implements Tracker {
             }
         }
 
-        if (bestRho >= acceptThreshold()) {
+        if (bestRho >= acceptThreshold() && (!config.requireContrast() || standsOut(frame, best))) {
             typicalSimilarity += TYPICAL_RATE * (bestRho - typicalSimilarity);
             Box sized = adaptScale(frame, best, bestRho);
             // The halves are judged only when it matters: the box would shrink, or a hold may end.
@@ -267,6 +269,23 @@ public final class MeanShiftTracker implements Tracker {
         return new TrackStep(frame.index(), lastFound, redetection.foundSimilarity, TrackStatus.SEARCHING);
     }
 
+    /**
+     * Whether what lies in {@code at} is more like the target model than its own surroundings in this frame are: the
+     * Bhattacharyya coefficient of the candidate with the model is above that of the ring around it with the model.
+     * A box that has slid off its object onto plain floor (the object left the frame, or the model took in floor
+     * from a loose first box) is as like the floor around it as anything, and is not taken as the object. The
+     * comparison of object and surround histograms is that of the discriminative colour trackers (Collins, Liu and
+     * Leordeanu, "Online selection of discriminative tracking features", PAMI 2005); using it as a test of a frame
+     * is this project's own.
+     */
+    private boolean standsOut(Frame frame, Box at) {
+        load(frame, at, 1, 1);
+        observed.compute(image, at);
+        BackgroundWeightedModel.ring(image, at, surroundNow);
+        return observed.bhattacharyya(model.target.values)
+                > surroundNow.bhattacharyya(model.target.values);
+    }
+
     /** The part of {@code b} inside the frame (the box itself when wholly inside or wholly out). */
     private static Box inFrame(Box b, Frame frame) {
         double x0 = Math.max(0, b.x());
@@ -327,6 +346,7 @@ public final class MeanShiftTracker implements Tracker {
                 return TenPercentScaleEstimator.adapt(localizer, image, located, located, rho, model.weighted,
                         model.target.values);
             case MOMENTS:
+            case CHECKED_MOMENTS:
                 return validatedMomentSize(frame, located, rho);
             case CENTRE_SURROUND:
                 return centreSurroundSize(frame, located);
@@ -365,6 +385,9 @@ public final class MeanShiftTracker implements Tracker {
         observed.compute(image, proposed);
         if (observed.bhattacharyya(model.target.values) < rho - SIZE_TOLERANCE) {
             return located;
+        }
+        if (config.scale() != ScaleMethod.CHECKED_MOMENTS) {
+            return proposed;
         }
         // And only if the centre-surround response of the likelihood (CentreSurroundScale) does not fall: a box
         // that widens over a look-alike neighbour keeps its colours, but its surround loses the contrast.

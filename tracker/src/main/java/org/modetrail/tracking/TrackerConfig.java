@@ -36,13 +36,17 @@ package org.modetrail.tracking;
  *                             instead of ending the track; default on
  * @param maxSearchFrames      frames the search goes on before the track ends, 0 for as long as there are frames;
  *                             default 0
+ * @param requireContrast      a frame counts as the object only if the candidate is more like the target model
+ *                             than the ring around it is; default off (not yet
+ *                             measured on the scenario family's tuning seeds)
  */
 public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, ScaleMethod scale,
                             int maxIterations, double convergencePx, double lostSimilarity,
                             double confidentSimilarity, int maxCoastFrames, double searchRadius,
                             double motionPenalty, double modelUpdateRate, double modelUpdateMinSimilarity,
                             double backgroundRefresh, double processNoise, double measurementNoise,
-                            boolean compensateLighting, boolean reDetect, int maxSearchFrames) {
+                            boolean compensateLighting, boolean reDetect, int maxSearchFrames,
+                            boolean requireContrast) {
 
     public TrackerConfig {
         check(maxSearchFrames >= 0, "maxSearchFrames must not be negative, got " + maxSearchFrames);
@@ -130,6 +134,7 @@ public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, 
         private boolean compensateLighting = true;
         private boolean reDetect = true;
         private int maxSearchFrames = 0;
+        private boolean requireContrast = false;
 
         public Builder() {
         }
@@ -153,6 +158,7 @@ public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, 
             compensateLighting = c.compensateLighting;
             reDetect = c.reDetect;
             maxSearchFrames = c.maxSearchFrames;
+            requireContrast = c.requireContrast;
         }
 
         public Builder binning(ColourBinning v) {
@@ -241,11 +247,16 @@ public record TrackerConfig(ColourBinning binning, boolean backgroundWeighting, 
             return this;
         }
 
+        public Builder requireContrast(boolean v) {
+            requireContrast = v;
+            return this;
+        }
+
         public TrackerConfig build() {
             return new TrackerConfig(binning, backgroundWeighting, scale, maxIterations, convergencePx,
                     lostSimilarity, confidentSimilarity, maxCoastFrames, searchRadius, motionPenalty,
                     modelUpdateRate, modelUpdateMinSimilarity, backgroundRefresh, processNoise, measurementNoise,
-                    compensateLighting, reDetect, maxSearchFrames);
+                    compensateLighting, reDetect, maxSearchFrames, requireContrast);
         }
     }
 }
