@@ -179,7 +179,7 @@ public final class MeanShiftTracker implements Tracker {
         load(frame, predicted, 0.8, LOCAL_MARGIN * size);
         Box best = localizer.localize(image, predicted, model.weighted, model.target.values);
         double bestRho = localizer.similarity;
-        boolean onClaimed = overlapsAny(best, claimed);
+        boolean onClaimed = ReDetection.overlapsAny(best, claimed);
         double drift = best.centreDistance(predicted) / diagonal;
         double bestScore = onClaimed ? Double.NEGATIVE_INFINITY : bestRho - config.motionPenalty() * drift * drift;
 
@@ -190,7 +190,7 @@ public final class MeanShiftTracker implements Tracker {
             for (int i = 0; i < n; i++) {
                 Box candidate = localizer.localize(image, box.movedTo(search.x(i), search.y(i)), model.weighted,
                         model.target.values);
-                if (overlapsAny(candidate, claimed)) {
+                if (ReDetection.overlapsAny(candidate, claimed)) {
                     continue;
                 }
                 double d = candidate.centreDistance(predicted) / diagonal;
@@ -448,15 +448,6 @@ public final class MeanShiftTracker implements Tracker {
         if (!image.covers(frame, x0, y0, x1, y1)) {
             image.load(frame, x0, y0, x1, y1, light);
         }
-    }
-
-    private static boolean overlapsAny(Box b, List<Box> boxes) {
-        for (int i = 0; i < boxes.size(); i++) {
-            if (b.iou(boxes.get(i)) > 0.3) {
-                return true;
-            }
-        }
-        return false;
     }
 
     /** The current box (the last output). */
