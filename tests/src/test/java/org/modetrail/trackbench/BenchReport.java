@@ -36,7 +36,8 @@ import org.modetrail.testsupport.RefData;
  * Options: {@code --seeds tuning|report} (default report), {@code --quick} (CI: {@value #QUICK_SEEDS} seeds per kind,
  * the first {@value #QUICK_FRAMES} frames, Modetrail and the fast peers), {@code --trackers a,b,...}
  * ({@link PeerTrackers#keys()}), {@code --clips auto|family|scenarios}, {@code --threads N} (default 2),
- * {@code --frames N}, {@code --vtest-truth FILE}, {@code --fresh}. Each clip's runs are kept under
+ * {@code --frames N}, {@code --seeds-per-kind N} (the first N of
+ * the split's seeds of each kind), {@code --vtest-truth FILE}, {@code --fresh}. Each clip's runs are kept under
  * {@code OUT/runs/} as they finish; a second run with the same options reuses them (so a long run can be stopped
  * and resumed) unless {@code --fresh}.
  */
@@ -54,7 +55,7 @@ public final class BenchReport {
 
     /** The command line, checked. */
     record Options(Path out, boolean quick, ClipSet.Split split, List<String> trackers, String clips,
-                   Optional<Path> vtestTruth, int threads, int frames, boolean fresh) {
+                   Optional<Path> vtestTruth, int threads, int frames, boolean fresh, int seedsPerKind) {
 
         static Options parse(String[] args) {
             Path out = null;
@@ -66,6 +67,7 @@ public final class BenchReport {
             int threads = 2;
             int frames = -1;
             boolean fresh = false;
+            int perKind = -1;
             for (int i = 0; i < args.length; i++) {
                 String a = args[i];
                 if (a.isBlank()) {
@@ -89,9 +91,11 @@ public final class BenchReport {
                     case "--vtest-truth" -> truth = Path.of(value(args, ++i, a));
                     case "--threads" -> threads = positive(value(args, ++i, a), a);
                     case "--frames" -> frames = positive(value(args, ++i, a), a);
+                    case "--seeds-per-kind" -> perKind = positive(value(args, ++i, a), a);
                     default -> throw new IllegalArgumentException("unknown argument '" + a + "'; the arguments are "
                             + "--out DIR [--quick] [--seeds tuning|report] [--trackers a,b,...] "
-                            + "[--clips auto|family|scenarios] [--threads N] [--frames N] [--vtest-truth FILE] "
+                            + "[--clips auto|family|scenarios] [--threads N] [--frames N] [--seeds-per-kind N] "
+                            + "[--vtest-truth FILE] "
                             + "[--fresh]");
                 }
             }
@@ -101,7 +105,8 @@ public final class BenchReport {
             List<String> keys = trackers != null ? PeerTrackers.parse(trackers)
                     : quick ? PeerTrackers.quickKeys() : PeerTrackers.keys();
             return new Options(out, quick, split, keys, clips, Optional.ofNullable(truth), threads,
-                    frames > 0 ? frames : quick ? QUICK_FRAMES : Integer.MAX_VALUE, fresh);
+                    frames > 0 ? frames : quick ? QUICK_FRAMES : Integer.MAX_VALUE, fresh,
+                    perKind > 0 ? perKind : quick ? QUICK_SEEDS : Integer.MAX_VALUE);
         }
 
         private static String value(String[] args, int i, String option) {
@@ -158,7 +163,7 @@ public final class BenchReport {
         for (String kind : set.kinds()) {
             groups.add(kind);
             long[] seeds = set.seeds(kind, o.split());
-            int n = o.quick() ? Math.min(QUICK_SEEDS, seeds.length) : seeds.length;
+            int n = Math.min(o.seedsPerKind(), seeds.length);
             seedsPerKind = Math.max(seedsPerKind, n);
             for (int i = 0; i < n; i++) {
                 long seed = seeds[i];

@@ -27,7 +27,11 @@ public final class FamilyTune {
         ExecutorService pool = Executors.newFixedThreadPool(2);
         List<Future<String>> rows = new ArrayList<>();
         List<double[]> totals = new ArrayList<>();
+        String only = System.getProperty("tune.kinds", "");
         for (FamilyKind kind : FamilyKind.values()) {
+            if (!only.isEmpty() && !java.util.Arrays.asList(only.split(",")).contains(kind.slug())) {
+                continue;
+            }
             long[] seeds = ScenarioFamily.tuningSeeds(kind);
             for (int i = 0; i < Math.min(seedsPerKind, seeds.length); i++) {
                 long seed = seeds[i];

@@ -22,6 +22,9 @@ public final class Tune {
         if (bits != null) {
             c = c.withBinning(new org.modetrail.tracking.RgbBinning(Integer.parseInt(bits)));
         }
+        if (Boolean.getBoolean("tune.hs")) {
+            c = c.withBinning(org.modetrail.tracking.HueSaturationBinning.defaults());
+        }
         String scale = System.getProperty("tune.scale");
         if (scale != null) {
             c = c.withScale(org.modetrail.tracking.ScaleMethod.valueOf(scale));

@@ -28,6 +28,11 @@ final class IlluminationCompensation {
     final int[] red = new int[256];
     final int[] green = new int[256];
     final int[] blue = new int[256];
+    /**
+     * A brightness gain on top of the frame-wide one, for light that changes only around the object (a shadow it
+     * walks into); set by the tracker, 1 for none.
+     */
+    private double localGain = 1;
     private boolean identity = true;
     /** Counts table rebuilds, so users of the tables know when theirs are stale. */
     private int version;
@@ -40,6 +45,7 @@ final class IlluminationCompensation {
     void reset(Frame frame, Box object) {
         mean(frame, object, reference);
         gain[0] = gain[1] = gain[2] = 1;
+        localGain = 1;
         rebuild();
     }
 
@@ -55,6 +61,20 @@ final class IlluminationCompensation {
         }
         if (stale) {
             rebuild();
+        }
+    }
+
+    /** The brightness gain applied on top of the frame-wide gains. */
+    double localGain() {
+        return localGain;
+    }
+
+    /** Sets the local brightness gain (bounded like the frame-wide gains) and rebuilds the tables if it moved. */
+    void setLocalGain(double g) {
+        double bounded = Math.max(MIN_GAIN, Math.min(MAX_GAIN, g));
+        if (bounded != localGain) {
+            localGain = bounded;
+            writeTables();
         }
     }
 
@@ -74,20 +94,25 @@ final class IlluminationCompensation {
 
     /** The compensated value of channel {@code c} (0 red, 1 green, 2 blue). */
     int channel(int c, int v) {
-        return Math.min(255, (int) Math.round(v * tableGain[c]));
+        return Math.min(255, (int) Math.round(v * tableGain[c] * localGain));
     }
 
     private void rebuild() {
+        System.arraycopy(gain, 0, tableGain, 0, 3);
+        writeTables();
+    }
+
+    /** The tables for the frame-wide gains they were last built with and the present local gain. */
+    private void writeTables() {
         version++;
         identity = true;
         for (int c = 0; c < 3; c++) {
-            tableGain[c] = gain[c];
-            identity &= Math.abs(gain[c] - 1) <= REBUILD;
+            identity &= Math.abs(tableGain[c] * localGain - 1) <= REBUILD;
         }
         for (int v = 0; v < 256; v++) {
-            red[v] = Math.min(255, (int) Math.round(v * tableGain[0])) << 16;
-            green[v] = Math.min(255, (int) Math.round(v * tableGain[1])) << 8;
-            blue[v] = Math.min(255, (int) Math.round(v * tableGain[2]));
+            red[v] = Math.min(255, (int) Math.round(v * tableGain[0] * localGain)) << 16;
+            green[v] = Math.min(255, (int) Math.round(v * tableGain[1] * localGain)) << 8;
+            blue[v] = Math.min(255, (int) Math.round(v * tableGain[2] * localGain));
         }
     }
 

@@ -44,7 +44,10 @@ final class MomentScaleEstimator {
 
     /** The box at the same centre with the size the moments say, or the box unchanged if they say nothing. */
     Box adapt(BinImage image, ColourLikelihood likelihood, Box box) {
-        if (refMu20 <= 0 || refMu02 <= 0 || !measure(image, likelihood, box) || mass < 0.2 * refMass) {
+        // Too little of the object's colour for its present size (not its start size: an object going away shrinks,
+        // and its mass with it): it is mostly hidden, and the moments would shrink the box onto what is left.
+        double expectedMass = refMass * box.area() / (refWidth * refHeight);
+        if (refMu20 <= 0 || refMu02 <= 0 || !measure(image, likelihood, box) || mass < 0.2 * expectedMass) {
             return box;
         }
         double w = refWidth * Math.sqrt(mu20 / refMu20);

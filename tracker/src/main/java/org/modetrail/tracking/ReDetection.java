@@ -30,6 +30,12 @@ final class ReDetection {
     static final double MARGIN = 0.08;
     /** Pixels binned per search at most; a larger region is scanned a strip at a time. */
     static final int PIXEL_BUDGET = 160_000;
+    /**
+     * Brightness gains (relative to the light the object was last seen in) that successive searches cycle through,
+     * so an object that comes back in a shadow or under a lamp is still found; a candidate's confirming searches
+     * keep the gain that found it. See {@link MeanShiftTracker}'s local brightness.
+     */
+    private static final double[] GAINS = {1, 0.72, 1.4, 0.85, 1.18, 0.6, 1.7};
 
     private int framesLost;
     private double lastX;
@@ -39,6 +45,7 @@ final class ReDetection {
     private double width;
     private double height;
     private int strip;
+    private double baseGain = 1;
     /** The candidate being confirmed: where, when, how many searches in a row. */
     private double chainX;
     private double chainY;
@@ -49,7 +56,8 @@ final class ReDetection {
     double foundSimilarity;
 
     /** Starts a search for an object last seen at {@code last} moving by (vx, vy) pixels a frame. */
-    void begin(Box last, double velocityX, double velocityY) {
+    void begin(Box last, double velocityX, double velocityY, IlluminationCompensation light) {
+        baseGain = light == null ? 1 : light.localGain();
         framesLost = 0;
         lastX = last.centreX();
         lastY = last.centreY();
@@ -92,6 +100,7 @@ final class ReDetection {
         int y0;
         int x1;
         int y1;
+        int strips = 1;
         if (confirming) {
             double r = size + speed * (framesLost - chainFrame + 1);
             x0 = (int) Math.floor(chainX - r);
@@ -108,8 +117,8 @@ final class ReDetection {
                 // A strip of whole rows within the budget, overlapping the next by a box height.
                 int rows = (int) Math.max(2 * height, PIXEL_BUDGET / Math.max(1, x1 - x0));
                 int advance = (int) Math.max(1, rows - height);
-                int strips = (int) Math.ceil((double) Math.max(1, y1 - y0 - rows) / advance) + 1;
-                int k = strip++ % strips;
+                strips = (int) Math.ceil((double) Math.max(1, y1 - y0 - rows) / advance) + 1;
+                int k = strip % strips;
                 y0 = y0 + k * advance;
                 y1 = Math.min(y1, y0 + rows);
             }
@@ -117,6 +126,13 @@ final class ReDetection {
         if (x1 - x0 < width / 2 || y1 - y0 < height / 2) {
             chainCount = 0;
             return false;
+        }
+        if (!confirming) {
+            // Each pass over the strips under one brightness of the cycle, so every strip is seen under every gain.
+            if (light != null) {
+                light.setLocalGain(baseGain * GAINS[(strip / strips) % GAINS.length]);
+            }
+            strip++;
         }
         image.load(frame, x0 - (int) width, y0 - (int) height, x1 + (int) width, y1 + (int) height, light);
         int n = search.search(image, likelihood, width, height, claimed);
