@@ -32,7 +32,7 @@ public final class FamilyTune {
             if (!only.isEmpty() && !java.util.Arrays.asList(only.split(",")).contains(kind.slug())) {
                 continue;
             }
-            long[] seeds = ScenarioFamily.tuningSeeds(kind);
+            long[] seeds = Boolean.getBoolean("tune.report") ? ScenarioFamily.reportSeeds(kind) : ScenarioFamily.tuningSeeds(kind);
             for (int i = 0; i < Math.min(seedsPerKind, seeds.length); i++) {
                 long seed = seeds[i];
                 rows.add(pool.submit(() -> run(kind, seed)));
