@@ -150,6 +150,10 @@ final class BinImage {
         return bins;
     }
 
+    ColourBinning binning() {
+        return binning;
+    }
+
     int binCount() {
         return binning.binCount();
     }

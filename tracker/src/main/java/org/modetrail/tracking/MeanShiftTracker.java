@@ -77,18 +77,18 @@ public final class MeanShiftTracker implements Tracker {
     private static final double RING_CHANGE = 0.08;
 
     private final TrackerConfig config;
-    private final BinImage image;
-    private final BackgroundWeightedModel model;
-    private final MeanShiftLocalizer localizer;
-    private final ColourLikelihood likelihood;
+    private BinImage image;
+    private BackgroundWeightedModel model;
+    private MeanShiftLocalizer localizer;
+    private ColourLikelihood likelihood;
     private final LikelihoodSearch search;
     private final ConstantVelocityKalman kalman;
     private final MomentScaleEstimator moments;
-    private final KernelHistogram observed;
+    private KernelHistogram observed;
     private final IlluminationCompensation light;
-    private final PartialOcclusion occlusion;
+    private PartialOcclusion occlusion;
     private final CentreSurroundScale surround;
-    private final KernelHistogram surroundNow;
+    private KernelHistogram surroundNow;
     private double coreW = 1;
     private double coreH = 1;
     private double startAspect;
@@ -118,19 +118,29 @@ public final class MeanShiftTracker implements Tracker {
 
     public MeanShiftTracker(TrackerConfig config) {
         this.config = config;
-        int bins = config.binning().binCount();
-        image = new BinImage(config.binning());
-        model = new BackgroundWeightedModel(bins, config.backgroundWeighting());
-        localizer = new MeanShiftLocalizer(bins, config.maxIterations(), config.convergencePx());
-        likelihood = new ColourLikelihood(bins);
+        allocate(config.binning());
         search = new LikelihoodSearch(MAX_CANDIDATES);
         kalman = new ConstantVelocityKalman(config.processNoise(), config.measurementNoise());
         moments = new MomentScaleEstimator(0.3, 0.08);
-        observed = new KernelHistogram(bins);
         light = config.compensateLighting() ? new IlluminationCompensation() : null;
+        surround = new CentreSurroundScale(0.3, 0.1);
+    }
+
+    /** The buffers whose size follows the number of colour bins. */
+    private void allocate(ColourBinning binning) {
+        int bins = binning.binCount();
+        image = new BinImage(binning);
+        model = new BackgroundWeightedModel(bins, config.backgroundWeighting());
+        localizer = new MeanShiftLocalizer(bins, config.maxIterations(), config.convergencePx());
+        likelihood = new ColourLikelihood(bins);
+        observed = new KernelHistogram(bins);
         occlusion = new PartialOcclusion(bins);
         surroundNow = new KernelHistogram(bins);
-        surround = new CentreSurroundScale(0.3, 0.1);
+    }
+
+    /** The colour binning in use for the present object (see {@link TrackerConfig#adaptBinning()}). */
+    public ColourBinning binning() {
+        return image.binning();
     }
 
     public TrackerConfig config() {
@@ -145,6 +155,12 @@ public final class MeanShiftTracker implements Tracker {
         if (start.intersection(new Box(0, 0, frame.width(), frame.height())) <= 0) {
             throw new IllegalArgumentException("the box " + start + " lies outside the " + frame.width() + "x"
                     + frame.height() + " frame " + frame.index());
+        }
+        if (config.adaptBinning() && config.binning() instanceof RgbBinning rgb) {
+            int bits = HistogramReliability.bitsFor(frame, start, rgb.bitsPerChannel());
+            if (!(image.binning() instanceof RgbBinning now && now.bitsPerChannel() == bits)) {
+                allocate(new RgbBinning(bits));
+            }
         }
         image.invalidate();
         if (light != null) {
