@@ -1,5 +1,7 @@
 package org.modetrail.run;
 
+import java.util.List;
+
 import org.modetrail.model.Box;
 import org.modetrail.tracking.MeanShiftTracker;
 import org.modetrail.tracking.TrackStatus;
@@ -22,6 +24,8 @@ final class Pass {
     private final TrackerConfig config;
     private MeanShiftTracker tracker;
     private boolean finished;
+    private Box held;
+    private double similarity = 1;
 
     Pass(int trackId, int start, Box startBox, int stop, boolean forward, TrackerConfig config) {
         this.trackId = trackId;
@@ -41,18 +45,29 @@ final class Pass {
         return forward ? frame >= start && frame <= stop : frame <= start && frame >= stop;
     }
 
-    void feed(Frame frame) {
+    /**
+     * Tracks {@code frame}, never settling on one of {@code claimed} (boxes other tracks hold in it). Afterwards
+     * {@link #held()} is this pass's box in the frame, or null.
+     */
+    void feed(Frame frame, List<Box> claimed) {
         int n = frame.index();
+        held = null;
         if (n == start) {
             tracker = new MeanShiftTracker(config);
             tracker.start(frame, startBox);
             finished = start == stop;
+            held = startBox;
+            similarity = 1;
             return;
         }
         if (tracker == null) {
             return; // the start frame was unreadable: nothing to track from
         }
-        TrackStep step = tracker.track(frame);
+        TrackStep step = tracker.track(frame, claimed);
+        similarity = step.status().found() ? step.similarity() : -1;
+        if (step.status().found()) {
+            held = step.box();
+        }
         if (step.status() == TrackStatus.TRACKED) {
             result.put(n, step.box(), step.similarity());
         } else if (step.status() == TrackStatus.REACQUIRED) {
@@ -65,6 +80,16 @@ final class Pass {
         if (step.status() == TrackStatus.LOST || n == stop) {
             finished = true;
         }
+    }
+
+    /** This pass's box in the frame last fed, or null when it had none. */
+    Box held() {
+        return held;
+    }
+
+    /** The similarity of the frame last fed, -1 without a box: passes are fed the most confident first. */
+    double confidence() {
+        return similarity;
     }
 
     boolean finished() {

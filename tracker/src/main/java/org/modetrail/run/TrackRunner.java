@@ -2,11 +2,15 @@ package org.modetrail.run;
 
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 
+import org.modetrail.model.Box;
 import org.modetrail.model.BoxSource;
 import org.modetrail.model.FrameAnnotation;
 import org.modetrail.model.Project;
@@ -107,8 +111,9 @@ public final class TrackRunner {
         long all = total;
         RunProgress seen = partial == null ? progress : new PartialProgress(progress, partialEvery,
                 () -> partial.accept(assemble(project, segments, true)));
-        sweepForward(video, forward, seen, cancelled, done, all);
-        sweepBackward(video, backward, seen, cancelled, done, all);
+        KeyframeClaims keys = new KeyframeClaims(project);
+        sweepForward(video, forward, keys, seen, cancelled, done, all);
+        sweepBackward(video, backward, keys, seen, cancelled, done, all);
         Project result = assemble(project, segments, false);
         progress.frames(all, all);
         return result;
@@ -160,7 +165,7 @@ public final class TrackRunner {
         }
     }
 
-    private static void sweepForward(VideoSource video, List<Pass> passes, RunProgress progress,
+    private static void sweepForward(VideoSource video, List<Pass> passes, KeyframeClaims keys, RunProgress progress,
                                      BooleanSupplier cancelled, long[] done, long total) throws VideoException {
         if (passes.isEmpty()) {
             return;
@@ -175,22 +180,13 @@ public final class TrackRunner {
             if (cancelled.getAsBoolean()) {
                 throw new CancellationException("tracking cancelled at frame " + frame.index());
             }
-            boolean any = false;
-            for (Pass p : passes) {
-                if (p.wants(frame.index())) {
-                    any = true;
-                    if (frame.index() != p.start) {
-                        done[0]++;
-                    }
-                    p.feed(frame);
-                }
-            }
+            boolean any = feedFrame(frame, passes, keys, done);
             progress.frames(done[0], total);
             return any || frame.index() < maxStart(passes);
         });
     }
 
-    private void sweepBackward(VideoSource video, List<Pass> passes, RunProgress progress,
+    private void sweepBackward(VideoSource video, List<Pass> passes, KeyframeClaims keys, RunProgress progress,
                                BooleanSupplier cancelled, long[] done, long total) throws VideoException {
         if (passes.isEmpty()) {
             return;
@@ -219,14 +215,7 @@ public final class TrackRunner {
                 if (cancelled.getAsBoolean()) {
                     throw new CancellationException("tracking cancelled at frame " + frame.index());
                 }
-                for (Pass p : passes) {
-                    if (p.wants(frame.index())) {
-                        if (frame.index() != p.start) {
-                            done[0]++;
-                        }
-                        p.feed(frame);
-                    }
-                }
+                feedFrame(frame, passes, keys, done);
                 progress.frames(done[0], total);
             }
         }
@@ -234,6 +223,69 @@ public final class TrackRunner {
     }
 
     /** Whether an unfinished pass visits any frame of {@code a..b}. */
+    /**
+     * Feeds {@code frame} to every pass that wants it, the most confident first, each kept off the boxes that other
+     * tracks hold: other tracks' keyframes in the frame, the boxes of passes fed before it in the frame, and the
+     * last frame's boxes of passes not fed yet. So a track whose object has gone cannot settle on another track's
+     * object, whichever is fed first (a greedy order alone let a track whose object vanished take its look-alike
+     * neighbour in the same frame). Returns whether any pass wanted the frame.
+     */
+    private static boolean feedFrame(Frame frame, List<Pass> passes, KeyframeClaims keys, long[] done) {
+        int n = frame.index();
+        List<Pass> now = new ArrayList<>();
+        for (Pass p : passes) {
+            if (p.wants(n)) {
+                now.add(p);
+            }
+        }
+        now.sort((a, b) -> Double.compare(b.confidence(), a.confidence()));
+        List<Box> claimed = new ArrayList<>();
+        for (Pass p : now) {
+            claimed.clear();
+            keys.addOthers(n, p.trackId, claimed);
+            // Passes fed before this one hold their box in this frame, the others still their last frame's.
+            for (Pass q : now) {
+                if (q.trackId != p.trackId && q.held() != null) {
+                    claimed.add(q.held());
+                }
+            }
+            if (n != p.start) {
+                done[0]++;
+            }
+            p.feed(frame, claimed);
+        }
+        return !now.isEmpty();
+    }
+
+    /** The boxes of every track's keyframes, by frame: places other tracks may not take. */
+    private static final class KeyframeClaims {
+        private final Map<Integer, List<FrameAnnotation>> byFrame = new HashMap<>();
+        private final Map<FrameAnnotation, Integer> owner = new IdentityHashMap<>();
+
+        KeyframeClaims(Project project) {
+            for (Track t : project.tracks()) {
+                for (FrameAnnotation a : t.keyframes()) {
+                    if (a.box() != null) {
+                        byFrame.computeIfAbsent(a.frame(), k -> new ArrayList<>()).add(a);
+                        owner.put(a, t.id());
+                    }
+                }
+            }
+        }
+
+        void addOthers(int frame, int trackId, List<Box> out) {
+            List<FrameAnnotation> here = byFrame.get(frame);
+            if (here == null) {
+                return;
+            }
+            for (FrameAnnotation a : here) {
+                if (owner.get(a) != trackId) {
+                    out.add(a.box());
+                }
+            }
+        }
+    }
+
     private static boolean anyWantsBetween(List<Pass> passes, int a, int b) {
         for (Pass p : passes) {
             if (!p.finished() && Math.min(p.start, p.stop) <= b && Math.max(p.start, p.stop) >= a) {

@@ -208,8 +208,10 @@ public final class MeanShiftTracker implements Tracker {
     }
 
     /**
-     * Like {@link #track(Frame)}, but never settles inside one of {@code claimed} (boxes other tracks hold in this
-     * frame), so two tracks cannot collapse onto one object when similar objects cross.
+     * Like {@link #track(Frame)}, but never settles on one of {@code claimed} (boxes other tracks hold) where that
+     * box overlaps the result more than this track's prediction does ({@link ReDetection#claimedByOther}), so two
+     * tracks cannot collapse onto one object when similar objects cross, and a track whose object has gone cannot
+     * take another track's.
      */
     public TrackStep track(Frame frame, List<Box> claimed) {
         if (!started || lost) {
@@ -233,7 +235,7 @@ public final class MeanShiftTracker implements Tracker {
         load(frame, predicted, 0.8, LOCAL_MARGIN * size);
         Box best = localizer.localize(image, predicted, model.weighted, model.target.values);
         double bestRho = localizer.similarity;
-        boolean onClaimed = ReDetection.overlapsAny(best, claimed);
+        boolean onClaimed = ReDetection.claimedByOther(best, predicted, claimed);
         double drift = best.centreDistance(predicted) / diagonal;
         double bestScore = onClaimed ? Double.NEGATIVE_INFINITY : bestRho - config.motionPenalty() * drift * drift;
 
@@ -244,7 +246,7 @@ public final class MeanShiftTracker implements Tracker {
             for (int i = 0; i < n; i++) {
                 Box candidate = localizer.localize(image, box.movedTo(search.x(i), search.y(i)), model.weighted,
                         model.target.values);
-                if (ReDetection.overlapsAny(candidate, claimed)) {
+                if (ReDetection.claimedByOther(candidate, predicted, claimed)) {
                     continue;
                 }
                 double d = candidate.centreDistance(predicted) / diagonal;
@@ -338,7 +340,7 @@ public final class MeanShiftTracker implements Tracker {
             image.invalidate();
             load(frame, predicted, 0.8, LOCAL_MARGIN * size);
             Box at = localizer.localize(image, predicted, model.weighted, model.target.values);
-            if (localizer.similarity > bestRho && !ReDetection.overlapsAny(at, claimed)) {
+            if (localizer.similarity > bestRho && !ReDetection.claimedByOther(at, predicted, claimed)) {
                 bestRho = localizer.similarity;
                 bestBox = at;
                 bestGain = light.localGain();

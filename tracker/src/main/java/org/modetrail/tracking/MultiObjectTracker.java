@@ -9,8 +9,8 @@ import org.modetrail.video.Frame;
 /**
  * Several objects over the same frames, one {@link MeanShiftTracker} state each, with a guard against two tracks
  * collapsing onto one object when similar objects cross: the tracks are solved one after another, the most
- * confident of the previous frame first, and each later one may not settle on a box an earlier one holds
- * ({@link MeanShiftTracker#track(Frame, List)}). Greedy ordering by confidence is common practice with no single
+ * confident of the previous frame first, and none may settle on a box another holds: in this frame for those
+ * solved before it, in the last frame for the others ({@link MeanShiftTracker#track(Frame, List)}). Greedy ordering by confidence is common practice with no single
  * source; a lost track stays lost and holds no box.
  */
 public final class MultiObjectTracker {
@@ -50,10 +50,15 @@ public final class MultiObjectTracker {
                 out[i] = last.get(i);
                 continue;
             }
-            TrackStep s = t.track(frame, claimed);
-            if (s.status().found()) {
-                claimed.add(s.box());
+            // Tracks solved before this one hold their box in this frame, the others still their last frame's.
+            claimed.clear();
+            for (int j = 0; j < n; j++) {
+                TrackStep held = out[j] != null ? out[j] : last.get(j);
+                if (j != i && !trackers.get(j).isLost() && held.status().found()) {
+                    claimed.add(held.box());
+                }
             }
+            TrackStep s = t.track(frame, claimed);
             out[i] = s;
         }
         last.clear();

@@ -23,6 +23,8 @@ final class MovingTargetVideo implements VideoSource {
     private final int height;
     private final FrameIndex index;
     long framesRead;
+    /** A second object, alike in every way, on its own path (null for none); always in view. */
+    Box[] twin;
 
     MovingTargetVideo(int width, int height, Box[] truth, boolean[] hidden) {
         this.width = width;
@@ -54,23 +56,28 @@ final class MovingTargetVideo implements VideoSource {
             int g = 150 + floor.nextInt(40);
             rgb[i] = 0xFF000000 | (g << 16) | ((g - 10) << 8) | (g - 25);
         }
+        if (twin != null) {
+            paintObject(rgb, twin[n], new Random(n + 7919));
+        }
         if (!hidden[n]) {
-            Random r = new Random(n);
-            Box b = truth[n];
-            for (int y = (int) b.y(); y < Math.ceil(b.bottom()); y++) {
-                for (int x = (int) b.x(); x < Math.ceil(b.right()); x++) {
-                    double dx = (x + 0.5 - b.centreX()) / (b.width() / 2);
-                    double dy = (y + 0.5 - b.centreY()) / (b.height() / 2);
-                    if (dx * dx + dy * dy < 1 && x >= 0 && y >= 0 && x < width && y < height) {
-                        int s = (int) (30 * dy) + r.nextInt(20) - 10;
-                        rgb[y * width + x] = 0xFF000000 | (clamp(0xC0 + s) << 16) | (clamp(0x30 + s) << 8)
-                                | clamp(0x20 + s);
-                    }
-                }
-            }
+            paintObject(rgb, truth[n], new Random(n));
         }
         framesRead++;
         return new Frame(n, n / 25.0, width, height, rgb);
+    }
+
+    private void paintObject(int[] rgb, Box b, Random r) {
+        for (int y = (int) b.y(); y < Math.ceil(b.bottom()); y++) {
+            for (int x = (int) b.x(); x < Math.ceil(b.right()); x++) {
+                double dx = (x + 0.5 - b.centreX()) / (b.width() / 2);
+                double dy = (y + 0.5 - b.centreY()) / (b.height() / 2);
+                if (dx * dx + dy * dy < 1 && x >= 0 && y >= 0 && x < width && y < height) {
+                    int s = (int) (30 * dy) + r.nextInt(20) - 10;
+                    rgb[y * width + x] = 0xFF000000 | (clamp(0xC0 + s) << 16) | (clamp(0x30 + s) << 8)
+                            | clamp(0x20 + s);
+                }
+            }
+        }
     }
 
     private static int clamp(int v) {

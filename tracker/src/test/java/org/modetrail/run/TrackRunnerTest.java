@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.concurrent.CancellationException;
 
 import org.junit.jupiter.api.Test;
+import org.modetrail.model.Box;
 import org.modetrail.model.BoxSource;
 import org.modetrail.model.Edit;
 import org.modetrail.model.Edits;
@@ -123,4 +124,34 @@ class TrackRunnerTest {
                 () -> new TrackRunner().trackAll(video, p, RunProgress.NONE, () -> true));
     }
 
+
+    @Test
+    void aTrackWhoseObjectHasGoneDoesNotTakeAnotherTracksObject() throws Exception {
+        // Two look-alikes: A moves right and vanishes at frame 25; B stands still ahead of it, a track of its own.
+        // Without the other track's claim, A's track coasts on its prediction into B and keeps it.
+        boolean[] hidden = new boolean[90];
+        for (int f = 25; f < 90; f++) {
+            hidden[f] = true;
+        }
+        MovingTargetVideo video = MovingTargetVideo.straightLine(90, hidden);
+        Box[] twin = new Box[90];
+        java.util.Arrays.fill(twin, new Box(190, 100, 40, 30));
+        video.twin = twin;
+        Project p = Edits.newTrack(projectFor(video), ANIMAL, 0, video.truth[0]).project();
+        p = Edits.newTrack(p, ANIMAL, 0, twin[0]).project();
+        Project done = new TrackRunner().trackAll(video, p, RunProgress.NONE, () -> false);
+        Track a = done.track(1).orElseThrow();
+        Track b = done.track(2).orElseThrow();
+        int onTwin = 0;
+        for (int f = 25; f < 90; f++) {
+            FrameAnnotation at = a.at(f).orElse(null);
+            if (at != null && at.box() != null && at.source() == BoxSource.TRACKED && at.box().iou(twin[f]) > 0.3) {
+                onTwin++;
+            }
+        }
+        assertEquals(0, onTwin, "frames on which A's track sat on B");
+        for (int f = 0; f < 90; f++) {
+            assertTrue(b.at(f).orElseThrow().box().iou(twin[f]) > 0.7, "B's own track, frame " + f);
+        }
+    }
 }

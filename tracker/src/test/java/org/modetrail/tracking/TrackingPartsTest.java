@@ -147,4 +147,19 @@ class TrackingPartsTest {
         assertTrue(steps.get(0).box().iou(a) > 0.5, "track 0 on object A: " + steps.get(0));
         assertTrue(steps.get(1).box().iou(b) > 0.5, "track 1 on object B: " + steps.get(1));
     }
+
+    @Test
+    void aClaimedBoxIsAnotherTracksOnlyWhenItOverlapsMoreThanTheOwnPrediction() {
+        Box other = new Box(100, 100, 40, 30);
+        List<Box> claimed = List.of(other);
+        // Crossing: the candidate is where this track expects its object, half over the other's box.
+        Box crossing = new Box(120, 100, 40, 30);
+        assertTrue(!ReDetection.claimedByOther(crossing, new Box(118, 100, 40, 30), claimed));
+        // A track whose object has gone: the candidate is the other object, away from the own prediction.
+        assertTrue(ReDetection.claimedByOther(new Box(101, 100, 40, 30), new Box(60, 90, 40, 30), claimed));
+        // Coasting right onto it: the prediction overlaps, but the claimed box overlaps the candidate more.
+        assertTrue(ReDetection.claimedByOther(new Box(100, 100, 40, 30), new Box(110, 104, 40, 30), claimed));
+        // Nothing claimed nearby.
+        assertTrue(!ReDetection.claimedByOther(new Box(300, 100, 40, 30), new Box(300, 100, 40, 30), claimed));
+    }
 }
