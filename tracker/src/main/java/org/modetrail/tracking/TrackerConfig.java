@@ -37,8 +37,9 @@ package org.modetrail.tracking;
  * @param maxSearchFrames      frames the search goes on before the track ends, 0 for as long as there are frames;
  *                             default 0
  * @param requireContrast      a frame counts as the object only if the candidate stands out from the ring around
- *                             it about as the object usually does; default on (the tuning seeds: boxes on a floor
- *                             the object had left 506 to 0, mean AUC 0.749 to 0.751 raw, 0.655 to 0.656 H.264)
+ *                             it about as the object usually does, and a re-acquisition only where it stands out
+ *                             half as well; default on (the tuning seeds: boxes on a floor the object had left 506
+ *                             to 0, mean AUC 0.749 to 0.751 raw, 0.655 to 0.656 H.264; see MeanShiftTracker)
  * @param adaptBinning         with RGB binning, take for each object the finest level per channel, from the
  *                             configured one down to 8, whose histogram of the object is reproducible
  *                             ({@link HistogramReliability}); default on (the tuning seeds through H.264: family
