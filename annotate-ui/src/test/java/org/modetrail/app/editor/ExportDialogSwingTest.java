@@ -99,18 +99,38 @@ class ExportDialogSwingTest {
         AbstractButton box = (AbstractButton) find(d, "export." + item.name());
         if (GuiActionRunner.execute(box::isSelected) != on) {
             robot.click(box);
+            robot.waitForIdle();
         }
+        if (GuiActionRunner.execute(box::isSelected) != on) {
+            // The robot's click landed off the window under a loaded Xvfb (as for Export below): tick it directly.
+            GuiActionRunner.execute(() -> {
+                box.doClick();
+                return null;
+            });
+        }
+        assertEquals(on, (boolean) GuiActionRunner.execute(box::isSelected), item + " ticked");
     }
 
     private void waitUntilFinished(ExportDialog d, ExportItem... items) throws InterruptedException {
-        EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> {
-            for (ExportItem i : items) {
-                if (d.state(i) == null || !d.state(i).finished()) {
-                    return false;
+        try {
+            EditorWindowFixture.waitFor(() -> GuiActionRunner.execute(() -> {
+                for (ExportItem i : items) {
+                    if (d.state(i) == null || !d.state(i).finished()) {
+                        return false;
+                    }
                 }
-            }
-            return true;
-        }), "the jobs " + List.of(items));
+                return true;
+            }), "the jobs " + List.of(items));
+        } catch (AssertionError e) {
+            String states = GuiActionRunner.execute(() -> {
+                StringBuilder sb = new StringBuilder();
+                for (ExportItem i : items) {
+                    sb.append(i).append('=').append(d.state(i) == null ? "none" : d.state(i).stage()).append(' ');
+                }
+                return sb.toString().trim();
+            });
+            throw new AssertionError(e.getMessage() + " (states: " + states + ")", e);
+        }
     }
 
     /**
