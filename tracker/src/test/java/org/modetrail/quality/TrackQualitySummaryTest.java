@@ -37,4 +37,23 @@ class TrackQualitySummaryTest {
                 new Concern(Concern.Kind.WEAK_SPAN, 5, 8, 0.5)), q.concerns());
         assertEquals((17 * 0.9 + 4 * 0.5) / 21, q.meanScore(), 1e-9);
     }
+
+    @Test
+    void aBoxThatGrowsStepByStepIsASizeDriftThoughNoStepIsAbrupt() {
+        // 6% more width a frame: no step reaches the 1.3 area ratio of an abrupt change, but by frame 24 the box is
+        // over 4 times the keyframe's area (1.06^48 = 16.4 at the end): the balloon of a box widening over a group.
+        Map<Integer, FrameAnnotation> frames = new TreeMap<>();
+        frames.put(0, FrameAnnotation.keyframe(0, new Box(100, 100, 20, 50)));
+        for (int f = 1; f <= 48; f++) {
+            frames.put(f, FrameAnnotation.tracked(f, new Box(100, 100, 20 * Math.pow(1.06, f), 50), 0.9));
+        }
+        TrackQuality q = TrackQualitySummary.defaults().of(new Track(1, "person", "", frames), 49);
+        int first = (int) Math.ceil(Math.log(4) / Math.log(1.06)); // 24: the first frame over 4 times
+        assertEquals(List.of(new Concern(Concern.Kind.SIZE_DRIFT, first, 48, Math.pow(1.06, 48))), q.concerns());
+        // The same boxes once the user has confirmed the grown size with a keyframe at frame 40 (an object that came
+        // nearer): every tracked frame is within 4 times of its nearest keyframe, so nothing drifts.
+        frames.put(40, FrameAnnotation.keyframe(40, new Box(100, 100, 20 * Math.pow(1.06, 40), 50)));
+        q = TrackQualitySummary.defaults().of(new Track(1, "person", "", frames), 49);
+        assertEquals(List.of(), q.concerns());
+    }
 }

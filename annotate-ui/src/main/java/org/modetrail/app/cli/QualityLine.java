@@ -33,6 +33,7 @@ final class QualityLine {
         return switch (c.kind()) {
             case JUMP -> String.format(Locale.ROOT, "%s (jump of %.1f box diagonals)", frames, c.value());
             case SIZE_CHANGE -> String.format(Locale.ROOT, "%s (size x%.2f)", frames, c.value());
+            case SIZE_DRIFT -> String.format(Locale.ROOT, "%s (size %.1fx off the keyframe's)", frames, c.value());
             case WEAK_SPAN -> String.format(Locale.ROOT, "%s (similarity %.2f)", frames, c.value());
         };
     }

@@ -215,6 +215,7 @@ public final class ReviewQueue {
         return switch (c.kind()) {
             case JUMP -> String.format(Locale.ROOT, "jump of %.1f box diagonals", c.value());
             case SIZE_CHANGE -> String.format(Locale.ROOT, "size x%.2f", c.value());
+            case SIZE_DRIFT -> String.format(Locale.ROOT, "size %.1fx off the keyframe's", c.value());
             case WEAK_SPAN -> String.format(Locale.ROOT, "similarity %.2f", c.value());
         };
     }
