@@ -3,7 +3,6 @@ package org.modetrail.run;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.CancellationException;
@@ -259,28 +258,25 @@ public final class TrackRunner {
 
     /** The boxes of every track's keyframes, by frame: places other tracks may not take. */
     private static final class KeyframeClaims {
-        private final Map<Integer, List<FrameAnnotation>> byFrame = new HashMap<>();
-        private final Map<FrameAnnotation, Integer> owner = new IdentityHashMap<>();
+        private record Claim(int trackId, Box box) {
+        }
+
+        private final Map<Integer, List<Claim>> byFrame = new HashMap<>();
 
         KeyframeClaims(Project project) {
             for (Track t : project.tracks()) {
                 for (FrameAnnotation a : t.keyframes()) {
                     if (a.box() != null) {
-                        byFrame.computeIfAbsent(a.frame(), k -> new ArrayList<>()).add(a);
-                        owner.put(a, t.id());
+                        byFrame.computeIfAbsent(a.frame(), k -> new ArrayList<>()).add(new Claim(t.id(), a.box()));
                     }
                 }
             }
         }
 
         void addOthers(int frame, int trackId, List<Box> out) {
-            List<FrameAnnotation> here = byFrame.get(frame);
-            if (here == null) {
-                return;
-            }
-            for (FrameAnnotation a : here) {
-                if (owner.get(a) != trackId) {
-                    out.add(a.box());
+            for (Claim c : byFrame.getOrDefault(frame, List.of())) {
+                if (c.trackId() != trackId) {
+                    out.add(c.box());
                 }
             }
         }

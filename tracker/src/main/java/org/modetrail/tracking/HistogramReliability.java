@@ -37,10 +37,10 @@ final class HistogramReliability {
 
     /** Bhattacharyya coefficient of the two checkerboard halves' histograms at {@code bits} per channel. */
     static double agreement(Frame frame, Box box, int bits) {
-        int size = 1 << (3 * bits);
+        RgbBinning binning = new RgbBinning(bits);
+        int size = binning.binCount();
         int[] even = new int[size];
         int[] odd = new int[size];
-        int drop = 8 - bits;
         double cx = box.centreX();
         double cy = box.centreY();
         double rx = box.width() / 2;
@@ -59,9 +59,7 @@ final class HistogramReliability {
                 if (dx * dx + dy * dy > 1) {
                     continue;
                 }
-                int p = rgb[y * frame.width() + x];
-                int bin = ((p >>> 16 & 0xFF) >>> drop) << (2 * bits) | ((p >>> 8 & 0xFF) >>> drop) << bits
-                        | (p & 0xFF) >>> drop;
+                int bin = binning.binOf(rgb[y * frame.width() + x]);
                 if (((x + y) & 1) == 0) {
                     even[bin]++;
                     ne++;

@@ -10,8 +10,8 @@ import org.modetrail.video.Frame;
  * Several objects over the same frames, one {@link MeanShiftTracker} state each, with a guard against two tracks
  * collapsing onto one object when similar objects cross: the tracks are solved one after another, the most
  * confident of the previous frame first, and none may settle on a box another holds: in this frame for those
- * solved before it, in the last frame for the others ({@link MeanShiftTracker#track(Frame, List)}). Greedy ordering by confidence is common practice with no single
- * source; a lost track stays lost and holds no box.
+ * solved before it, in the last frame for the others ({@link MeanShiftTracker#track(Frame, List)}). Greedy
+ * ordering by confidence is common practice with no single source; a lost track stays lost and holds no box.
  */
 public final class MultiObjectTracker {
     private final TrackerConfig config;
